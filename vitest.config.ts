@@ -1,0 +1,28 @@
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+const root = fileURLToPath(new URL(".", import.meta.url));
+
+export default defineConfig({
+  resolve: { alias: { "@": root } },
+  test: {
+    environment: "node",
+    projects: [
+      {
+        extends: true,
+        test: { name: "unit", include: ["tests/unit/**/*.test.{ts,tsx}"] },
+      },
+      {
+        extends: true,
+        test: {
+          name: "integration",
+          include: ["tests/integration/**/*.test.{ts,tsx}"],
+          fileParallelism: false,
+          testTimeout: 30_000,
+          hookTimeout: 30_000,
+          globalSetup: ["tests/integration/global-setup.ts"],
+        },
+      },
+    ],
+  },
+});
