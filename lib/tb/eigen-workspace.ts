@@ -1,0 +1,52 @@
+/** Scratch buffers for the Hermitian eigen-solver, sized once so repeated solves never allocate. */
+export interface EigenWorkspace {
+  readonly n: number;
+}
+
+export class HermitianScratch implements EigenWorkspace {
+  readonly n: number;
+  /** Diagonal of the real tridiagonal matrix; eigenvalues after QL. */
+  readonly diag: Float64Array;
+  /** off[i] couples rows i and i+1 of the tridiagonal matrix (off[n-1] is spare). */
+  readonly off: Float64Array;
+  /** Householder scalar h of the reflector that reduced row i (0: no reflector). */
+  readonly reflectorNorm: Float64Array;
+  /** Diagonal unitary phase that makes the tridiagonal matrix real. */
+  readonly phaseRe: Float64Array;
+  readonly phaseIm: Float64Array;
+  /** Matrix–vector product, then the rank-2 update vector (or column sums in the back-transform). */
+  readonly tmpRe: Float64Array;
+  readonly tmpIm: Float64Array;
+  /** Eigenvectors of the tridiagonal matrix, one per row (rows keep the QL rotations contiguous). */
+  readonly rotations: Float64Array;
+  readonly order: Int32Array;
+
+  constructor(n: number) {
+    assertSize(n);
+    this.n = n;
+    this.diag = new Float64Array(n);
+    this.off = new Float64Array(n);
+    this.reflectorNorm = new Float64Array(n);
+    this.phaseRe = new Float64Array(n);
+    this.phaseIm = new Float64Array(n);
+    this.tmpRe = new Float64Array(n);
+    this.tmpIm = new Float64Array(n);
+    this.rotations = new Float64Array(n * n);
+    this.order = new Int32Array(n);
+  }
+}
+
+export function assertSize(n: number): void {
+  if (!Number.isInteger(n) || n < 0) throw new Error(`eigen: matrix order must be a non-negative integer, got ${n}`);
+}
+
+export function createEigenWorkspace(n: number): EigenWorkspace {
+  return new HermitianScratch(n);
+}
+
+export function scratchFor(n: number, ws: EigenWorkspace | undefined): HermitianScratch {
+  if (ws === undefined) return new HermitianScratch(n);
+  if (!(ws instanceof HermitianScratch)) throw new Error("eigen: workspace must come from createEigenWorkspace");
+  if (ws.n !== n) throw new Error(`eigen: workspace is for n = ${ws.n}, matrix has n = ${n}`);
+  return ws;
+}

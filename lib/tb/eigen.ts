@@ -1,0 +1,89 @@
+import { backTransformVectors, reduceHermitianToTridiagonal } from "./eigen-householder";
+import { tridiagonalEigenvalues, tridiagonalEigenvectors } from "./eigen-tridiagonal-ql";
+import { assertSize, scratchFor, type EigenWorkspace, type HermitianScratch } from "./eigen-workspace";
+
+/*
+ * Dense Hermitian eigen-solver: Householder reduction to a real tridiagonal matrix (eigen-householder.ts),
+ * implicit QL with Wilkinson shifts (eigen-tridiagonal-ql.ts), back-transformation of the vectors.
+ * Sources: Golub & Van Loan, "Matrix Computations", 4th ed. (2013), §8.3; Wilkinson & Reinsch, Handbook for
+ * Automatic Computation vol. II (1971), tred2/tql2 and the EISPACK complex variants htridi/htribk.
+ */
+
+export { createEigenWorkspace, type EigenWorkspace } from "./eigen-workspace";
+
+/** H is the full n×n Hermitian matrix, row-major, H[i*n+j] = re[i*n+j] + i·im[i*n+j]. re/im MAY be overwritten.
+ *  Writes the n eigenvalues, ascending, into `values`. No allocation when a workspace of size n is passed. */
+export function eigvalsHermitian(
+  n: number, re: Float64Array, im: Float64Array, values: Float64Array, ws?: EigenWorkspace,
+): void {
+  checkInput(n, re, im, values);
+  const s = scratchFor(n, ws);
+  reduceHermitianToTridiagonal(n, re, im, s);
+  tridiagonalEigenvalues(n, s.diag, s.off);
+  const d = s.diag;
+  for (let i = 1; i < n; i++) {
+    const x = d[i];
+    let j = i - 1;
+    while (j >= 0 && d[j] > x) {
+      d[j + 1] = d[j];
+      j--;
+    }
+    d[j + 1] = x;
+  }
+  values.set(d);
+}
+
+/** Same, plus orthonormal eigenvectors: column j of the row-major n×n (vecRe, vecIm) is the eigenvector of values[j]. */
+export function eigHermitian(
+  n: number, re: Float64Array, im: Float64Array, values: Float64Array,
+  vecRe: Float64Array, vecIm: Float64Array, ws?: EigenWorkspace,
+): void {
+  checkInput(n, re, im, values);
+  checkLength("vecRe", vecRe, n * n);
+  checkLength("vecIm", vecIm, n * n);
+  const s = scratchFor(n, ws);
+  reduceHermitianToTridiagonal(n, re, im, s);
+  const rows = s.rotations;
+  rows.fill(0);
+  for (let i = 0; i < n; i++) rows[i * n + i] = 1;
+  tridiagonalEigenvectors(n, s.diag, s.off, rows);
+  sortOrder(n, s);
+  const { diag, order } = s;
+  for (let j = 0; j < n; j++) {
+    const src = order[j] * n;
+    values[j] = diag[order[j]];
+    for (let k = 0; k < n; k++) vecRe[k * n + j] = rows[src + k];
+  }
+  backTransformVectors(n, re, im, vecRe, vecIm, s);
+}
+
+/** Stable insertion sort of indices by eigenvalue (n is small: the cost is far below the O(n³) reduction). */
+function sortOrder(n: number, s: HermitianScratch): void {
+  const { diag, order } = s;
+  for (let i = 0; i < n; i++) {
+    const x = diag[i];
+    let j = i - 1;
+    while (j >= 0 && diag[order[j]] > x) {
+      order[j + 1] = order[j];
+      j--;
+    }
+    order[j + 1] = i;
+  }
+}
+
+function checkInput(n: number, re: Float64Array, im: Float64Array, values: Float64Array): void {
+  assertSize(n);
+  checkLength("re", re, n * n);
+  checkLength("im", im, n * n);
+  checkLength("values", values, n);
+  for (let i = 0; i < n; i++) {
+    const row = i * n;
+    let sum = 0;
+    for (let k = 0; k <= i; k++) sum += re[row + k] * 0 + im[row + k] * 0;
+    if (sum !== 0) throw new Error(`eigen: matrix row ${i} holds a non-finite entry`);
+  }
+}
+
+function checkLength(name: string, a: Float64Array, expected: number): void {
+  if (a.length !== expected) throw new Error(`eigen: ${name} has length ${a.length}, expected ${expected}`);
+}
