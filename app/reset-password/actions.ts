@@ -1,0 +1,23 @@
+"use server";
+
+import { requestResetInput, resetPasswordInput } from "@/lib/accounts/schemas";
+import { requestPasswordReset, resetPassword } from "@/lib/accounts/service";
+import { defineAction } from "@/lib/action";
+
+export const requestResetAction = defineAction({
+  access: "public",
+  schema: requestResetInput,
+  run: async ({ email }) => {
+    await requestPasswordReset(email);
+    return { email };
+  },
+});
+
+export const resetPasswordAction = defineAction({
+  access: "public",
+  schema: resetPasswordInput,
+  run: async (input) => {
+    await resetPassword(input);
+    return null;
+  },
+});

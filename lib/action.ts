@@ -1,0 +1,60 @@
+import "server-only";
+import type { z } from "zod";
+import { AppError, type ErrorCode } from "./errors";
+import { requireRole, requireUser } from "./auth/guard";
+import type { Role } from "./auth/roles";
+import type { SessionUser } from "./auth/session-user";
+
+export type ActionResult<T> =
+  | { ok: true; data: T; message?: string }
+  | { ok: false; code: ErrorCode | "internal:error"; error: string; fieldErrors?: Record<string, string[]> };
+
+type Access = { roles: Role[] } | "signed-in" | "public";
+
+/** FormData → plain object; keys that appear more than once (checkbox groups) become arrays. */
+export function formDataToObject(form: FormData): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const key of new Set(form.keys())) {
+    if (key.startsWith("$ACTION")) continue;
+    const all = form.getAll(key).filter((v): v is string => typeof v === "string");
+    out[key] = all.length > 1 ? all : all[0];
+  }
+  return out;
+}
+
+export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join(".") || "_form";
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}
+
+/**
+ * Every server action goes through here: session → zod parse → service → discriminated result.
+ * Actions are public POST endpoints, so the access check is never optional.
+ */
+export function defineAction<S extends z.ZodType, T>(options: {
+  access: Access;
+  schema: S;
+  run: (input: z.output<S>, user: SessionUser | null) => Promise<T>;
+  message?: string;
+}) {
+  return async (_prev: ActionResult<T> | null, form: FormData): Promise<ActionResult<T>> => {
+    try {
+      const user =
+        options.access === "public" ? null : options.access === "signed-in" ? await requireUser() : await requireRole(...options.access.roles);
+      const parsed = options.schema.safeParse(formDataToObject(form));
+      if (!parsed.success) {
+        return { ok: false, code: "invalid:input", error: "Some fields need attention.", fieldErrors: fieldErrorsOf(parsed.error) };
+      }
+      const data = await options.run(parsed.data, user);
+      return { ok: true, data, message: options.message };
+    } catch (err) {
+      if (err instanceof AppError) return { ok: false, code: err.code, error: err.message, fieldErrors: err.fieldErrors };
+      console.error("[bandgate] action failed", err);
+      return { ok: false, code: "internal:error", error: "Something went wrong on our side." };
+    }
+  };
+}

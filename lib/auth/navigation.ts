@@ -1,0 +1,21 @@
+import type { Role } from "./roles";
+
+export interface NavItem {
+  href: string;
+  label: string;
+  /** Shown to anyone signed in when empty; otherwise to holders of any of these roles. */
+  roles: readonly Role[];
+}
+
+export const NAV_ITEMS: readonly NavItem[] = [
+  { href: "/", label: "Overview", roles: [] },
+  { href: "/families", label: "Model families", roles: [] },
+  { href: "/admin/people", label: "People", roles: ["admin"] },
+  { href: "/admin/mailbox", label: "Mail catcher", roles: ["admin"] },
+  { href: "/admin/audit", label: "Audit trail", roles: ["admin", "curator"] },
+  { href: "/account", label: "Account", roles: [] },
+];
+
+export function navigationFor(roles: readonly Role[]): NavItem[] {
+  return NAV_ITEMS.filter((item) => item.roles.length === 0 || item.roles.some((r) => roles.includes(r)));
+}

@@ -1,0 +1,30 @@
+import { z } from "zod";
+
+const envSchema = z.object({
+  DATABASE_URL: z.string().url().default("postgres://postgres@127.0.0.1:54329/bandgate"),
+  NEXTAUTH_SECRET: z.string().min(16).optional(),
+  APP_URL: z.string().url().default("http://localhost:3000"),
+  SMTP_HOST: z.string().min(1).default("127.0.0.1"),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  SMTP_SECURE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default("Bandgate <bandgate@localhost>"),
+  BANDGATE_ENV: z.enum(["production", "development", "test"]).default("production"),
+});
+
+export type ServerEnv = z.infer<typeof envSchema>;
+
+let cached: ServerEnv | undefined;
+
+/** The server's configuration, read and validated once. */
+export function serverEnv(): ServerEnv {
+  if (cached) return cached;
+  const parsed = envSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const detail = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ");
+    throw new Error(`Invalid environment: ${detail}`);
+  }
+  cached = parsed.data;
+  return cached;
+}

@@ -1,0 +1,53 @@
+/**
+ * One error vocabulary for the whole app: "<kind>:<subject>" codes, mapped to HTTP statuses by kind.
+ * Only the message of an AppError reaches a user; anything else is logged and shown as a generic failure.
+ */
+export type ErrorKind = "unauthenticated" | "forbidden" | "invalid" | "not-found" | "conflict" | "rate-limited" | "gone";
+
+export type ErrorCode = `${ErrorKind}:${string}`;
+
+const STATUS: Record<ErrorKind, number> = {
+  unauthenticated: 401,
+  forbidden: 403,
+  invalid: 400,
+  "not-found": 404,
+  conflict: 409,
+  "rate-limited": 429,
+  gone: 410,
+};
+
+export class AppError extends Error {
+  readonly code: ErrorCode;
+  readonly fieldErrors?: Record<string, string[]>;
+
+  constructor(code: ErrorCode, message: string, fieldErrors?: Record<string, string[]>) {
+    super(message);
+    this.name = "AppError";
+    this.code = code;
+    this.fieldErrors = fieldErrors;
+  }
+
+  get kind(): ErrorKind {
+    return this.code.split(":")[0] as ErrorKind;
+  }
+}
+
+export function httpStatusOf(code: ErrorCode): number {
+  return STATUS[code.split(":")[0] as ErrorKind] ?? 500;
+}
+
+export interface ErrorBody {
+  error: { code: ErrorCode | "internal:error"; message: string; fieldErrors?: Record<string, string[]> };
+}
+
+/** The JSON body and status a route handler returns for any thrown value. */
+export function toErrorResponse(err: unknown): { body: ErrorBody; status: number } {
+  if (err instanceof AppError) {
+    return {
+      body: { error: { code: err.code, message: err.message, fieldErrors: err.fieldErrors } },
+      status: httpStatusOf(err.code),
+    };
+  }
+  console.error("[bandgate] unexpected error", err);
+  return { body: { error: { code: "internal:error", message: "Something went wrong on our side." } }, status: 500 };
+}

@@ -1,0 +1,46 @@
+#!/usr/bin/env bash
+# npm start: install what is missing, start PostgreSQL and the local mail catcher, migrate, seed the demo once, build, serve.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib.sh
+
+PORT="${PORT:-3000}"
+DEV=0; [ "${1:-}" = "--dev" ] && DEV=1
+CHILDREN=()
+cleanup() {
+  trap - EXIT INT TERM
+  for pid in "${CHILDREN[@]}"; do kill_tree "$pid"; done
+  for pid in "${CHILDREN[@]}"; do wait "$pid" 2>/dev/null || true; done
+  pg_down
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+ensure_node_modules
+if [ -z "${DATABASE_URL:-}" ]; then
+  ensure_postgres_binaries
+  pg_up "$PWD/.data/pg" 54329
+  ensure_database 54329 bandgate
+  export DATABASE_URL="postgres://postgres@127.0.0.1:54329/bandgate"
+fi
+ensure_auth_secret
+export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"
+export APP_URL="${APP_URL:-$NEXTAUTH_URL}"
+
+npx tsx db/migrate.ts
+npx tsx db/seed.ts
+
+if [ -z "${SMTP_HOST:-}" ]; then
+  export SMTP_HOST=127.0.0.1 SMTP_PORT="${FAKE_SMTP_PORT:-2525}"
+  node_modules/.bin/tsx mail/fake-smtp-main.ts & CHILDREN+=($!)
+  wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; exit 1; }
+fi
+
+if [ "$DEV" -eq 1 ]; then
+  node_modules/.bin/next dev -p "$PORT" & CHILDREN+=($!)
+else
+  build_if_needed
+  log "serving on http://localhost:$PORT (Ctrl-C stops everything this command started)"
+  node_modules/.bin/next start -p "$PORT" & CHILDREN+=($!)
+fi
+wait "${CHILDREN[-1]}"

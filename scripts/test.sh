@@ -1,0 +1,41 @@
+#!/usr/bin/env bash
+# npm test: the same set-up as npm start on its own cluster, port and database (never the demo data),
+# then unit, integration (real PostgreSQL) and browser end-to-end tests. Exits non-zero on any failure.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib.sh
+
+TEST_PG_PORT=54339
+CHILDREN=()
+cleanup() {
+  trap - EXIT INT TERM
+  for pid in "${CHILDREN[@]}"; do kill_tree "$pid"; done
+  for pid in "${CHILDREN[@]}"; do wait "$pid" 2>/dev/null || true; done
+  pg_down
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+ensure_node_modules
+ensure_chromium
+ensure_postgres_binaries
+pg_up "$PWD/.data/pg-test" "$TEST_PG_PORT"
+recreate_database "$TEST_PG_PORT" bandgate_test
+export DATABASE_URL="postgres://postgres@127.0.0.1:$TEST_PG_PORT/bandgate_test"
+export NEXTAUTH_SECRET="test-secret-not-for-production-use-0123456789"
+export E2E_PORT=3100
+export NEXTAUTH_URL="http://127.0.0.1:$E2E_PORT" APP_URL="http://127.0.0.1:$E2E_PORT"
+export SMTP_HOST=127.0.0.1 SMTP_PORT=2535 MAIL_FROM="Bandgate test <bandgate@test.invalid>"
+export BANDGATE_ENV=test
+
+npx tsx db/migrate.ts
+node_modules/.bin/tsx mail/fake-smtp-main.ts & CHILDREN+=($!)
+wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; exit 1; }
+build_if_needed
+
+status=0
+log "unit tests"; npx vitest run --project unit || status=1
+log "integration tests (PostgreSQL on 127.0.0.1:$TEST_PG_PORT)"; npx vitest run --project integration || status=1
+log "browser end-to-end tests (Debian Chromium)"; CI=1 npx playwright test || status=1
+if [ "$status" -eq 0 ]; then log "all suites passed"; else log "some suites failed"; fi
+exit "$status"
