@@ -1,0 +1,99 @@
+import { computeAlignmentShift, selectReferencePairs, type BandError, type ReferenceBands } from "./compare-reference";
+import { computeFitStatistics, type FitStatistics } from "./fit-statistics";
+import { validateFitInput, validatePointCount, type BandFitOptions } from "./fit-input";
+import { buildResiduals, type FitEvaluation, type WeightedPair } from "./fit-residuals";
+import { minimiseLeastSquares, type LmStatus } from "./levenberg-marquardt";
+
+/**
+ * Levenberg–Marquardt fit of a band model to reference bands (see levenberg-marquardt.ts for the method).
+ * The reference points are chosen once, at the start values (window on the aligned reference, band offset,
+ * weights ≠ 0), so the cost stays a smooth function of the parameters during the fit.
+ */
+export interface FitModel {
+  evaluate(p: Float64Array): FitEvaluation;
+}
+
+export interface FitResult {
+  status: LmStatus;
+  reason: string;
+  names: string[];
+  start: number[];
+  /** Best point found (the final point for "converged"). */
+  values: number[];
+  iterations: number;
+  /** ½ Σ w·ΔE² at the best point. */
+  cost: number;
+  shift: number;
+  points: number;
+  rms: number;
+  maxAbs: number;
+  perBand: BandError[];
+  statistics: FitStatistics;
+  elapsedMs: number;
+}
+
+export async function fitBandModel(
+  model: FitModel,
+  names: string[],
+  start: number[],
+  reference: ReferenceBands,
+  opts: BandFitOptions = {},
+): Promise<FitResult> {
+  const t0 = Date.now();
+  validateFitInput(names, start, reference, opts);
+  const P = names.length;
+  const first = model.evaluate(Float64Array.from(start));
+  if (first.energies.length !== reference.energies.length) throw new Error("fit: the model must be evaluated at the reference k-points");
+  const compareOpts = { ...opts, alignment: opts.alignment ?? "none" };
+  const shift0 = computeAlignmentShift(first.energies, reference, compareOpts);
+  const pairs: WeightedPair[] = selectReferencePairs(first.energies, reference, shift0, compareOpts)
+    .map((p) => ({ ...p, weight: (opts.bandWeights?.[p.referenceBand] ?? 1) * (opts.pointWeights?.[p.k]?.[p.referenceBand] ?? 1) }))
+    .filter((p) => p.weight > 0);
+  validatePointCount(pairs.length, P, opts.window);
+  const lm = await minimiseLeastSquares(
+    { evaluate: (p) => buildResiduals(model.evaluate(p), pairs, reference, opts, P), lower: bound(opts.lower, P, -Infinity), upper: bound(opts.upper, P, Infinity) },
+    Float64Array.from(start),
+    {
+      maxIterations: opts.maxIterations,
+      signal: opts.signal,
+      onProgress: opts.onProgress && ((p) => opts.onProgress?.({ iteration: p.iteration, cost: p.cost, elapsedMs: p.elapsedMs })),
+    },
+  );
+  const final = buildResiduals(model.evaluate(lm.parameters), pairs, reference, opts, P);
+  return {
+    status: lm.status,
+    reason: lm.reason,
+    names,
+    start: [...start],
+    values: Array.from(lm.parameters),
+    iterations: lm.iterations,
+    cost: lm.cost,
+    shift: final.shift,
+    ...errorsOf(final.r, pairs),
+    statistics: computeFitStatistics(final.r, final.jac, P),
+    elapsedMs: Date.now() - t0,
+  };
+}
+
+function bound(values: number[] | undefined, n: number, fill: number): Float64Array {
+  return Float64Array.from({ length: n }, (_, i) => values?.[i] ?? fill);
+}
+
+/** Unweighted per-band RMS and max |ΔE| at the final point (residuals divided by √w). */
+function errorsOf(r: Float64Array, pairs: WeightedPair[]): { points: number; rms: number; maxAbs: number; perBand: BandError[] } {
+  const bands = new Map<number, BandError & { s2: number }>();
+  let s2 = 0;
+  let maxAbs = 0;
+  pairs.forEach((p, i) => {
+    const d = Math.abs(r[i] / Math.sqrt(p.weight));
+    const b = bands.get(p.modelBand) ?? { modelBand: p.modelBand, referenceBand: p.referenceBand, points: 0, rms: 0, maxAbs: 0, s2: 0 };
+    b.points++;
+    b.s2 += d * d;
+    b.maxAbs = Math.max(b.maxAbs, d);
+    bands.set(p.modelBand, b);
+    s2 += d * d;
+    maxAbs = Math.max(maxAbs, d);
+  });
+  const perBand = [...bands.values()].sort((a, b) => a.modelBand - b.modelBand).map(({ s2: s, ...b }) => ({ ...b, rms: Math.sqrt(s / b.points) }));
+  return { points: pairs.length, rms: Math.sqrt(s2 / pairs.length), maxAbs, perBand };
+}
