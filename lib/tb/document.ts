@@ -1,0 +1,58 @@
+import { MODEL_DOCUMENT_SCHEMA, type ModelDocument } from "./document-schema";
+import { validateSemantics } from "./document-validate";
+
+export type { ModelDocument, SiteSpec, ShellSpec, HoppingSpec, KPathSpec } from "./document-schema";
+export { MODEL_DOCUMENT_SCHEMA } from "./document-schema";
+
+export interface DocumentIssue {
+  path: string;
+  message: string;
+}
+
+export class ModelDocumentError extends Error {
+  readonly issues: DocumentIssue[];
+  constructor(issues: DocumentIssue[]) {
+    super(`invalid model document: ${issues.map((i) => `${i.path || "(document)"}: ${i.message}`).join("; ")}`);
+    this.name = "ModelDocumentError";
+    this.issues = issues;
+  }
+}
+
+export function formatPath(path: readonly PropertyKey[]): string {
+  return path.reduce<string>((acc, part) => {
+    if (typeof part === "number") return `${acc}[${part}]`;
+    const name = String(part);
+    return acc ? `${acc}.${name}` : name;
+  }, "");
+}
+
+/** Schema check only: every problem with its field path. Empty when the document has the right shape. */
+export function schemaIssues(input: unknown): DocumentIssue[] {
+  const result = MODEL_DOCUMENT_SCHEMA.safeParse(input);
+  if (result.success) return [];
+  return result.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message }));
+}
+
+export interface ValidationReport {
+  document: ModelDocument | null;
+  errors: DocumentIssue[];
+  /** Not fatal: e.g. a parameter without a citation or a reason. */
+  warnings: DocumentIssue[];
+}
+
+/** Shape and meaning checks together; never throws. */
+export function validateModelDocument(input: unknown): ValidationReport {
+  const result = MODEL_DOCUMENT_SCHEMA.safeParse(input);
+  if (!result.success) {
+    return { document: null, errors: result.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })), warnings: [] };
+  }
+  const { errors, warnings } = validateSemantics(result.data);
+  return { document: errors.length ? null : result.data, errors, warnings };
+}
+
+/** Parses and validates a model document; throws ModelDocumentError naming every bad field. */
+export function parseModelDocument(input: unknown): ModelDocument {
+  const report = validateModelDocument(input);
+  if (!report.document) throw new ModelDocumentError(report.errors);
+  return report.document;
+}
