@@ -1,0 +1,60 @@
+import { describe, expect, it } from "vitest";
+import { navigationFor } from "@/lib/auth/navigation";
+import { hasAnyRole, isRole, normaliseRoles } from "@/lib/auth/roles";
+import { isThrottled, MAX_FAILURES_PER_ACCOUNT, MAX_FAILURES_PER_IP } from "@/lib/auth/rate-limit";
+import { safeCallbackPath, signInErrorMessage } from "@/lib/auth/sign-in-messages";
+
+describe("roles", () => {
+  it("recognises only the five roles", () => {
+    expect(isRole("curator")).toBe(true);
+    expect(isRole("superuser")).toBe(false);
+  });
+  it("normalises order and drops duplicates", () => {
+    expect(normaliseRoles(["admin", "author", "admin"])).toEqual(["author", "admin"]);
+  });
+  it("matches any of the wanted roles", () => {
+    expect(hasAnyRole(["reviewer"], ["admin", "reviewer"])).toBe(true);
+    expect(hasAnyRole(["reviewer"], ["admin"])).toBe(false);
+  });
+});
+
+describe("navigation by role", () => {
+  const hrefs = (roles: Parameters<typeof navigationFor>[0]) => navigationFor(roles).map((i) => i.href);
+  it("shows admin pages to admins only", () => {
+    expect(hrefs(["admin"])).toContain("/admin/people");
+    expect(hrefs(["admin"])).toContain("/admin/mailbox");
+    for (const role of ["author", "reviewer", "curator", "consumer"] as const) {
+      expect(hrefs([role])).not.toContain("/admin/people");
+      expect(hrefs([role])).not.toContain("/admin/mailbox");
+    }
+  });
+  it("lets curators read the audit trail", () => {
+    expect(hrefs(["curator"])).toContain("/admin/audit");
+    expect(hrefs(["author"])).not.toContain("/admin/audit");
+  });
+  it("gives everyone the overview and their account", () => {
+    expect(hrefs([])).toEqual(["/", "/families", "/account"]);
+  });
+});
+
+describe("sign-in throttling", () => {
+  it("throttles at the account limit and at the address limit", () => {
+    expect(isThrottled({ account: MAX_FAILURES_PER_ACCOUNT - 1, ip: 0 })).toBe(false);
+    expect(isThrottled({ account: MAX_FAILURES_PER_ACCOUNT, ip: 0 })).toBe(true);
+    expect(isThrottled({ account: 0, ip: MAX_FAILURES_PER_IP })).toBe(true);
+  });
+  it("turns codes into messages without revealing which part was wrong", () => {
+    expect(signInErrorMessage("signin-failed")).toMatch(/do not match/);
+    expect(signInErrorMessage("signin-throttled")).toMatch(/Too many failed/);
+    expect(signInErrorMessage(null)).toBeNull();
+  });
+});
+
+describe("return path after sign-in", () => {
+  it("keeps same-site paths and refuses others", () => {
+    expect(safeCallbackPath("/admin/people")).toBe("/admin/people");
+    expect(safeCallbackPath("https://evil.example/")).toBe("/");
+    expect(safeCallbackPath("//evil.example")).toBe("/");
+    expect(safeCallbackPath(undefined)).toBe("/");
+  });
+});
