@@ -1,13 +1,15 @@
 import type { HermitianScratch } from "./eigen-workspace";
 
 /*
- * Reduction of a complex Hermitian matrix to a real symmetric tridiagonal one, and the matching
- * back-transformation of eigenvectors.
+ * Reduction of a complex Hermitian matrix to a real symmetric tridiagonal one.
  * Method: Householder reflectors P = I − v vᴴ / h applied from the last row upwards on the lower triangle,
  * then a diagonal unitary phase D that makes the sub-diagonal real and non-negative.
  * Sources: Wilkinson & Reinsch, Handbook for Automatic Computation vol. II (1971), contributions II/2 (tred2)
  * and the complex variants htridi/htribk of EISPACK (Smith et al., Lecture Notes in Computer Science 6, 1976);
  * Golub & Van Loan, "Matrix Computations", 4th ed. (2013), §5.1 and §8.3.1.
+ * Each step's rank-2 update B − v qᴴ − q vᴴ is deferred and fused with the next step's product B v′, so the
+ * shrinking lower triangle is read and written once per step instead of twice (Dongarra, Hammarling &
+ * Sorensen, J. Comput. Appl. Math. 27 (1989) 215, discuss the same fusion for blocked reductions).
  */
 
 /**
@@ -20,19 +22,30 @@ export function reduceHermitianToTridiagonal(n: number, re: Float64Array, im: Fl
   if (n === 0) return;
   phaseRe[n - 1] = 1;
   phaseIm[n - 1] = 0;
+  let qRe = s.tmpRe;
+  let qIm = s.tmpIm;
+  let pRe = s.tmp2Re;
+  let pIm = s.tmp2Im;
+  // Row of the reflector whose rank-2 update (with q) is still owed to the leading block; −1 when none.
+  let owed = -1;
   for (let i = n - 1; i >= 1; i--) {
     const l = i - 1;
     const row = i * n;
+    if (owed >= 0) updateRows(n, i, i, owed, re, im, qRe, qIm);
     let scale = 0;
     for (let k = 0; k <= l; k++) scale += Math.abs(re[row + k]) + Math.abs(im[row + k]);
-    let cRe: number;
-    let cIm: number;
-    let magnitude: number;
+    let cRe = 1;
+    let cIm = 0;
+    let magnitude = 0;
     if (l === 0 || scale === 0) {
       reflectorNorm[i] = 0;
       magnitude = safeHypot(re[row + l], im[row + l]);
-      cRe = magnitude > 0 ? re[row + l] / magnitude : 1;
-      cIm = magnitude > 0 ? im[row + l] / magnitude : 0;
+      if (magnitude > 0) {
+        cRe = re[row + l] / magnitude;
+        cIm = im[row + l] / magnitude;
+      }
+      if (owed >= 0) updateRows(n, 0, l, owed, re, im, qRe, qIm);
+      owed = -1;
     } else {
       // Reflector from the conjugated row u = conj(A[i][0..l]) / scale: v = u + e^{iφ}‖u‖ e_l, h = ‖u‖² + ‖u‖|u_l|.
       const inv = 1 / scale;
@@ -58,7 +71,15 @@ export function reduceHermitianToTridiagonal(n: number, re: Float64Array, im: Fl
       magnitude = g * scale;
       cRe = -pr;
       cIm = pi;
-      applyReflectorBothSides(n, row, l, h, re, im, s);
+      if (owed < 0) {
+        qRe.fill(0, 0, l + 1);
+        qIm.fill(0, 0, l + 1);
+      }
+      updateAndMultiply(n, l, owed < 0 ? row : owed, row, re, im, qRe, qIm, pRe, pIm);
+      finishUpdateVector(l, row, h, re, im, pRe, pIm);
+      [qRe, pRe] = [pRe, qRe];
+      [qIm, pIm] = [pIm, qIm];
+      owed = row;
     }
     off[l] = magnitude;
     // δ_{i−1} = δ_i · conj(c_i)/|c_i| turns conj(δ_i) c_i δ_{i−1} into |c_i|.
@@ -71,34 +92,94 @@ export function reduceHermitianToTridiagonal(n: number, re: Float64Array, im: Fl
   for (let i = 0; i < n; i++) diag[i] = re[i * n + i];
 }
 
-/** B ← P B P for the leading (l+1)×(l+1) block B, via B − v qᴴ − q vᴴ with q = p − K v, p = B v / h. */
-function applyReflectorBothSides(
-  n: number, row: number, l: number, h: number, re: Float64Array, im: Float64Array, s: HermitianScratch,
+/** Rows from..to of the lower triangle −= v qᴴ + q vᴴ, with v stored at offset vRow. */
+function updateRows(
+  n: number, from: number, to: number, vRow: number, re: Float64Array, im: Float64Array, qRe: Float64Array, qIm: Float64Array,
 ): void {
-  const pRe = s.tmpRe;
-  const pIm = s.tmpIm;
+  for (let j = from; j <= to; j++) {
+    const rj = j * n;
+    const vr = re[vRow + j];
+    const vi = im[vRow + j];
+    const qr = qRe[j];
+    const qi = qIm[j];
+    for (let k = 0; k <= j; k++) {
+      const wr = re[vRow + k];
+      const wi = im[vRow + k];
+      const ur = qRe[k];
+      const ui = qIm[k];
+      re[rj + k] -= vr * ur + vi * ui + qr * wr + qi * wi;
+      im[rj + k] -= vi * ur - vr * ui + qi * wr - qr * wi;
+    }
+  }
+}
+
+/**
+ * One pass over rows 0..l of the lower triangle: apply the owed update (v at vRow, q) and accumulate the
+ * Hermitian product p = B x with x the new reflector at xRow (B is read from its lower triangle only).
+ */
+function updateAndMultiply(
+  n: number, l: number, vRow: number, xRow: number, re: Float64Array, im: Float64Array,
+  qRe: Float64Array, qIm: Float64Array, pRe: Float64Array, pIm: Float64Array,
+): void {
   pRe.fill(0, 0, l + 1);
   pIm.fill(0, 0, l + 1);
   for (let j = 0; j <= l; j++) {
     const rj = j * n;
-    const vr = re[row + j];
-    const vi = im[row + j];
+    const vr = re[vRow + j];
+    const vi = im[vRow + j];
+    const qr = qRe[j];
+    const qi = qIm[j];
+    const xr = re[xRow + j];
+    const xi = im[xRow + j];
     let sr = 0;
     let si = 0;
-    for (let k = 0; k < j; k++) {
-      const ar = re[rj + k];
-      const ai = im[rj + k];
-      const wr = re[row + k];
-      const wi = im[row + k];
-      sr += ar * wr - ai * wi;
-      si += ar * wi + ai * wr;
-      pRe[k] += ar * vr + ai * vi;
-      pIm[k] += ar * vi - ai * vr;
+    let k = 0;
+    for (; k + 1 < j; k += 2) {
+      const wr0 = re[vRow + k], wi0 = im[vRow + k], wr1 = re[vRow + k + 1], wi1 = im[vRow + k + 1];
+      const ur0 = qRe[k], ui0 = qIm[k], ur1 = qRe[k + 1], ui1 = qIm[k + 1];
+      const ar0 = re[rj + k] - (vr * ur0 + vi * ui0 + qr * wr0 + qi * wi0);
+      const ai0 = im[rj + k] - (vi * ur0 - vr * ui0 + qi * wr0 - qr * wi0);
+      const ar1 = re[rj + k + 1] - (vr * ur1 + vi * ui1 + qr * wr1 + qi * wi1);
+      const ai1 = im[rj + k + 1] - (vi * ur1 - vr * ui1 + qi * wr1 - qr * wi1);
+      re[rj + k] = ar0;
+      im[rj + k] = ai0;
+      re[rj + k + 1] = ar1;
+      im[rj + k + 1] = ai1;
+      const yr0 = re[xRow + k], yi0 = im[xRow + k], yr1 = re[xRow + k + 1], yi1 = im[xRow + k + 1];
+      sr += ar0 * yr0 - ai0 * yi0 + ar1 * yr1 - ai1 * yi1;
+      si += ar0 * yi0 + ai0 * yr0 + ar1 * yi1 + ai1 * yr1;
+      pRe[k] += ar0 * xr + ai0 * xi;
+      pIm[k] += ar0 * xi - ai0 * xr;
+      pRe[k + 1] += ar1 * xr + ai1 * xi;
+      pIm[k + 1] += ar1 * xi - ai1 * xr;
     }
-    const djj = re[rj + j];
-    pRe[j] += sr + djj * vr;
-    pIm[j] += si + djj * vi;
+    for (; k < j; k++) {
+      const wr = re[vRow + k];
+      const wi = im[vRow + k];
+      const ur = qRe[k];
+      const ui = qIm[k];
+      const ar = re[rj + k] - (vr * ur + vi * ui + qr * wr + qi * wi);
+      const ai = im[rj + k] - (vi * ur - vr * ui + qi * wr - qr * wi);
+      re[rj + k] = ar;
+      im[rj + k] = ai;
+      const yr = re[xRow + k];
+      const yi = im[xRow + k];
+      sr += ar * yr - ai * yi;
+      si += ar * yi + ai * yr;
+      pRe[k] += ar * xr + ai * xi;
+      pIm[k] += ar * xi - ai * xr;
+    }
+    const djj = re[rj + j] - 2 * (vr * qr + vi * qi);
+    re[rj + j] = djj;
+    pRe[j] += sr + djj * xr;
+    pIm[j] += si + djj * xi;
   }
+}
+
+/** q = p/h − K v with K = Re(vᴴp)/(2h²), so that P B P = B − v qᴴ − q vᴴ. */
+function finishUpdateVector(
+  l: number, row: number, h: number, re: Float64Array, im: Float64Array, pRe: Float64Array, pIm: Float64Array,
+): void {
   const invH = 1 / h;
   let vp = 0;
   for (let k = 0; k <= l; k++) {
@@ -110,73 +191,6 @@ function applyReflectorBothSides(
   for (let k = 0; k <= l; k++) {
     pRe[k] -= half * re[row + k];
     pIm[k] -= half * im[row + k];
-  }
-  for (let j = 0; j <= l; j++) {
-    const rj = j * n;
-    const vr = re[row + j];
-    const vi = im[row + j];
-    const qr = pRe[j];
-    const qi = pIm[j];
-    for (let k = 0; k <= j; k++) {
-      const wr = re[row + k];
-      const wi = im[row + k];
-      const ur = pRe[k];
-      const ui = pIm[k];
-      re[rj + k] -= vr * ur + vi * ui + qr * wr + qi * wi;
-      im[rj + k] -= vi * ur - vr * ui + qi * wr - qr * wi;
-    }
-  }
-}
-
-/**
- * vec ← Q D vec, where on entry row k of the row-major n×n (vecRe, vecIm) holds component k of every
- * tridiagonal eigenvector (real, vecIm ignored) and Q = P_{n−1}⋯P_2 is stored in the lower triangle of (re, im).
- */
-export function backTransformVectors(
-  n: number, re: Float64Array, im: Float64Array, vecRe: Float64Array, vecIm: Float64Array, s: HermitianScratch,
-): void {
-  const { phaseRe, phaseIm, reflectorNorm } = s;
-  for (let k = 0; k < n; k++) {
-    const dr = phaseRe[k];
-    const di = phaseIm[k];
-    const rk = k * n;
-    for (let j = 0; j < n; j++) {
-      const z = vecRe[rk + j];
-      vecRe[rk + j] = dr * z;
-      vecIm[rk + j] = di * z;
-    }
-  }
-  const sRe = s.tmpRe;
-  const sIm = s.tmpIm;
-  for (let i = 2; i < n; i++) {
-    const h = reflectorNorm[i];
-    if (h === 0) continue;
-    const row = i * n;
-    sRe.fill(0);
-    sIm.fill(0);
-    for (let k = 0; k < i; k++) {
-      const wr = re[row + k];
-      const wi = im[row + k];
-      const rk = k * n;
-      for (let j = 0; j < n; j++) {
-        const yr = vecRe[rk + j];
-        const yi = vecIm[rk + j];
-        sRe[j] += wr * yr + wi * yi;
-        sIm[j] += wr * yi - wi * yr;
-      }
-    }
-    const invH = 1 / h;
-    for (let k = 0; k < i; k++) {
-      const wr = re[row + k] * invH;
-      const wi = im[row + k] * invH;
-      const rk = k * n;
-      for (let j = 0; j < n; j++) {
-        const tr = sRe[j];
-        const ti = sIm[j];
-        vecRe[rk + j] -= wr * tr - wi * ti;
-        vecIm[rk + j] -= wr * ti + wi * tr;
-      }
-    }
   }
 }
 

@@ -14,9 +14,12 @@ export class HermitianScratch implements EigenWorkspace {
   /** Diagonal unitary phase that makes the tridiagonal matrix real. */
   readonly phaseRe: Float64Array;
   readonly phaseIm: Float64Array;
-  /** Matrix–vector product, then the rank-2 update vector (or column sums in the back-transform). */
+  /** Two pairs of length-n vectors that alternate between the owed rank-2 update vector q and the next
+   *  matrix–vector product p of the reduction; the first pair also holds column sums in the back-transform. */
   readonly tmpRe: Float64Array;
   readonly tmpIm: Float64Array;
+  readonly tmp2Re: Float64Array;
+  readonly tmp2Im: Float64Array;
   /** Eigenvectors of the tridiagonal matrix, one per row (rows keep the QL rotations contiguous). */
   readonly rotations: Float64Array;
   readonly order: Int32Array;
@@ -31,6 +34,8 @@ export class HermitianScratch implements EigenWorkspace {
     this.phaseIm = new Float64Array(n);
     this.tmpRe = new Float64Array(n);
     this.tmpIm = new Float64Array(n);
+    this.tmp2Re = new Float64Array(n);
+    this.tmp2Im = new Float64Array(n);
     this.rotations = new Float64Array(n * n);
     this.order = new Int32Array(n);
   }

@@ -1,4 +1,5 @@
-import { backTransformVectors, reduceHermitianToTridiagonal } from "./eigen-householder";
+import { backTransformVectors } from "./eigen-back-transform";
+import { reduceHermitianToTridiagonal } from "./eigen-householder";
 import { tridiagonalEigenvalues, tridiagonalEigenvectors } from "./eigen-tridiagonal-ql";
 import { assertSize, scratchFor, type EigenWorkspace, type HermitianScratch } from "./eigen-workspace";
 
