@@ -21,7 +21,10 @@ export type GapResult =
       smallestDirect: { value: number; kIndex: number; kFrac: number[]; label?: string };
       occupiedBands: number;
     }
-  | { kind: "metal"; reason: "partially filled band" | "bands overlap"; occupiedBands: number; vbm?: BandEdge; cbm?: BandEdge };
+  | { kind: "metal"; reason: "partially filled band" | "bands overlap" | "bands touch"; occupiedBands: number; vbm?: BandEdge; cbm?: BandEdge };
+
+/** Valence and conduction bands closer than this (eV) touch: a zero-gap semimetal, not an insulator. */
+export const TOUCH_TOLERANCE = 1e-6;
 
 export interface GapInput {
   energies: LevelList[];
@@ -58,7 +61,8 @@ export function findBandGap(input: GapInput): GapResult {
   };
   const vbm = edge(occupiedBands - 1, (a, b) => a > b);
   const cbm = edge(occupiedBands, (a, b) => a < b);
-  if (cbm.energy <= vbm.energy) return { kind: "metal", reason: "bands overlap", occupiedBands, vbm, cbm };
+  if (cbm.energy < vbm.energy) return { kind: "metal", reason: "bands overlap", occupiedBands, vbm, cbm };
+  if (cbm.energy - vbm.energy <= TOUCH_TOLERANCE) return { kind: "metal", reason: "bands touch", occupiedBands, vbm, cbm };
   let kd = 0;
   const vertical = (k: number) => energies[k][occupiedBands] - energies[k][occupiedBands - 1];
   for (let k = 1; k < energies.length; k++) if (vertical(k) < vertical(kd)) kd = k;

@@ -59,7 +59,7 @@ export function honeycombDocument(t = -2.7, a = 2.46): ModelDocument {
     onsite: { C: { pz: 0 } },
     shells: [{ species: ["C", "C"], index: 1, distance: a / Math.sqrt(3), params: { pp_sigma: 0, pp_pi: t } }],
     electronCount: 2,
-    kPath: { type: "custom", points: { "Γ": [0, 0], M: [0.5, 0], K: [1 / 3, 1 / 3] }, segments: [["Γ", "M", "K", "Γ"]], pointsTotal: 61 },
+    kPath: { type: "custom", points: { "Γ": [0, 0], M: [0.5, 0], K: [1 / 3, 2 / 3] }, segments: [["Γ", "M", "K", "Γ"]], pointsTotal: 61 },
   });
 }
 
@@ -81,5 +81,24 @@ export function zincBlendeDocument(overrides: Record<string, number> = {}, spinO
     ...(spinOrbit ? { spinOrbit } : {}),
     electronCount: 8,
     kPath: { type: "custom", points: { L: [0.5, 0.5, 0.5], "Γ": [0, 0, 0], X: [0, 0.5, 0.5] }, segments: [["L", "Γ", "X"]], pointsTotal: 61 },
+  });
+}
+
+/** Two s sites per cell with alternating bonds v (d1) and w (d2): bands ±|v + w·e^{i2πk}|. */
+export function dimerChainDocument(v = -1.2, w = -0.7, d1 = 1.4, d2 = 1.6): ModelDocument {
+  return parseModelDocument({
+    ...base("dimerised chain"),
+    lattice: { dimension: 1, vectors: [[d1 + d2, 0, 0]] },
+    sites: [
+      { label: "A1", species: "A", position: [0, 0, 0], orbitals: ["s"] },
+      { label: "A2", species: "A", position: [d1, 0, 0], orbitals: ["s"] },
+    ],
+    onsite: { A: { s: 0 } },
+    shells: [
+      { species: ["A", "A"], index: 1, distance: d1, params: { ss_sigma: v } },
+      { species: ["A", "A"], index: 2, distance: d2, params: { ss_sigma: w } },
+    ],
+    electronCount: 2,
+    kPath: chainPath,
   });
 }
