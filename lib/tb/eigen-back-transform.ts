@@ -2,60 +2,91 @@ import type { HermitianScratch } from "./eigen-workspace";
 
 /*
  * Eigenvectors of the Hermitian matrix from those of its real tridiagonal form: v = Q D z, with D the diagonal
- * phase and Q the product of the stored Householder reflectors (EISPACK htribk; Wilkinson & Reinsch,
- * Handbook for Automatic Computation vol. II (1971), II/2; Golub & Van Loan, "Matrix Computations",
- * 4th ed. (2013), §5.1.6 and §8.3.1). Each reflector is applied to all columns at once so that the inner
- * loops run along contiguous rows.
+ * phase and Q = P_{n−1}⋯P_2 the product of the stored Householder reflectors (EISPACK htribk; Wilkinson &
+ * Reinsch, Handbook for Automatic Computation vol. II (1971), II/2; Golub & Van Loan, "Matrix Computations",
+ * 4th ed. (2013), §5.1.6 and §8.3.1).
+ * Vectors are held one per row, so each reflector costs a dot product accumulated in registers plus an axpy,
+ * both along contiguous memory; two vectors share each pass over a reflector.
  */
 
-/**
- * vec ← Q D vec, where on entry row k of the row-major n×n (vecRe, vecIm) holds component k of every
- * tridiagonal eigenvector (real, vecIm ignored) and Q = P_{n−1}⋯P_2 is stored in the lower triangle of (re, im).
- */
-export function backTransformVectors(
+/** Rows of (vecRe, vecIm): on entry real tridiagonal eigenvectors z in vecRe; on exit Q D z. */
+export function backTransformRows(
   n: number, re: Float64Array, im: Float64Array, vecRe: Float64Array, vecIm: Float64Array, s: HermitianScratch,
 ): void {
   const { phaseRe, phaseIm, reflectorNorm } = s;
-  for (let k = 0; k < n; k++) {
-    const dr = phaseRe[k];
-    const di = phaseIm[k];
-    const rk = k * n;
-    for (let j = 0; j < n; j++) {
-      const z = vecRe[rk + j];
-      vecRe[rk + j] = dr * z;
-      vecIm[rk + j] = di * z;
+  for (let j = 0; j < n; j++) {
+    const rj = j * n;
+    for (let k = 0; k < n; k++) {
+      const z = vecRe[rj + k];
+      vecRe[rj + k] = phaseRe[k] * z;
+      vecIm[rj + k] = phaseIm[k] * z;
     }
   }
-  const sRe = s.tmpRe;
-  const sIm = s.tmpIm;
+  let j = 0;
+  for (; j + 1 < n; j += 2) {
+    const a = j * n;
+    const b = a + n;
+    for (let i = 2; i < n; i++) {
+      const h = reflectorNorm[i];
+      if (h === 0) continue;
+      const row = i * n;
+      let ar = 0;
+      let ai = 0;
+      let br = 0;
+      let bi = 0;
+      for (let k = 0; k < i; k++) {
+        const vr = re[row + k];
+        const vi = im[row + k];
+        const xr = vecRe[a + k];
+        const xi = vecIm[a + k];
+        const yr = vecRe[b + k];
+        const yi = vecIm[b + k];
+        ar += vr * xr + vi * xi;
+        ai += vr * xi - vi * xr;
+        br += vr * yr + vi * yi;
+        bi += vr * yi - vi * yr;
+      }
+      const inv = 1 / h;
+      ar *= inv;
+      ai *= inv;
+      br *= inv;
+      bi *= inv;
+      for (let k = 0; k < i; k++) {
+        const vr = re[row + k];
+        const vi = im[row + k];
+        vecRe[a + k] -= vr * ar - vi * ai;
+        vecIm[a + k] -= vr * ai + vi * ar;
+        vecRe[b + k] -= vr * br - vi * bi;
+        vecIm[b + k] -= vr * bi + vi * br;
+      }
+    }
+  }
+  if (j < n) applyReflectorsToRow(n, j * n, re, im, vecRe, vecIm, reflectorNorm);
+}
+
+function applyReflectorsToRow(
+  n: number, a: number, re: Float64Array, im: Float64Array, vecRe: Float64Array, vecIm: Float64Array,
+  reflectorNorm: Float64Array,
+): void {
   for (let i = 2; i < n; i++) {
     const h = reflectorNorm[i];
     if (h === 0) continue;
     const row = i * n;
-    sRe.fill(0);
-    sIm.fill(0);
+    let ar = 0;
+    let ai = 0;
     for (let k = 0; k < i; k++) {
-      const wr = re[row + k];
-      const wi = im[row + k];
-      const rk = k * n;
-      for (let j = 0; j < n; j++) {
-        const yr = vecRe[rk + j];
-        const yi = vecIm[rk + j];
-        sRe[j] += wr * yr + wi * yi;
-        sIm[j] += wr * yi - wi * yr;
-      }
+      const vr = re[row + k];
+      const vi = im[row + k];
+      ar += vr * vecRe[a + k] + vi * vecIm[a + k];
+      ai += vr * vecIm[a + k] - vi * vecRe[a + k];
     }
-    const invH = 1 / h;
+    ar /= h;
+    ai /= h;
     for (let k = 0; k < i; k++) {
-      const wr = re[row + k] * invH;
-      const wi = im[row + k] * invH;
-      const rk = k * n;
-      for (let j = 0; j < n; j++) {
-        const tr = sRe[j];
-        const ti = sIm[j];
-        vecRe[rk + j] -= wr * tr - wi * ti;
-        vecIm[rk + j] -= wr * ti + wi * tr;
-      }
+      const vr = re[row + k];
+      const vi = im[row + k];
+      vecRe[a + k] -= vr * ar - vi * ai;
+      vecIm[a + k] -= vr * ai + vi * ar;
     }
   }
 }

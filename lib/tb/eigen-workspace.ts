@@ -20,8 +20,9 @@ export class HermitianScratch implements EigenWorkspace {
   readonly tmpIm: Float64Array;
   readonly tmp2Re: Float64Array;
   readonly tmp2Im: Float64Array;
-  /** Eigenvectors of the tridiagonal matrix, one per row (rows keep the QL rotations contiguous). */
-  readonly rotations: Float64Array;
+  /** Eigenvectors, one per row (keeps QL rotations and reflector applications on contiguous memory). */
+  readonly vectorsRe: Float64Array;
+  readonly vectorsIm: Float64Array;
   readonly order: Int32Array;
 
   constructor(n: number) {
@@ -36,7 +37,8 @@ export class HermitianScratch implements EigenWorkspace {
     this.tmpIm = new Float64Array(n);
     this.tmp2Re = new Float64Array(n);
     this.tmp2Im = new Float64Array(n);
-    this.rotations = new Float64Array(n * n);
+    this.vectorsRe = new Float64Array(n * n);
+    this.vectorsIm = new Float64Array(n * n);
     this.order = new Int32Array(n);
   }
 }

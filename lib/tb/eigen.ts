@@ -1,4 +1,4 @@
-import { backTransformVectors } from "./eigen-back-transform";
+import { backTransformRows } from "./eigen-back-transform";
 import { reduceHermitianToTridiagonal } from "./eigen-householder";
 import { tridiagonalEigenvalues, tridiagonalEigenvectors } from "./eigen-tridiagonal-ql";
 import { assertSize, scratchFor, type EigenWorkspace, type HermitianScratch } from "./eigen-workspace";
@@ -44,18 +44,20 @@ export function eigHermitian(
   checkLength("vecIm", vecIm, n * n);
   const s = scratchFor(n, ws);
   reduceHermitianToTridiagonal(n, re, im, s);
-  const rows = s.rotations;
-  rows.fill(0);
-  for (let i = 0; i < n; i++) rows[i * n + i] = 1;
-  tridiagonalEigenvectors(n, s.diag, s.off, rows);
+  const { vectorsRe, vectorsIm, diag, order } = s;
+  vectorsRe.fill(0);
+  for (let i = 0; i < n; i++) vectorsRe[i * n + i] = 1;
+  tridiagonalEigenvectors(n, diag, s.off, vectorsRe);
+  backTransformRows(n, re, im, vectorsRe, vectorsIm, s);
   sortOrder(n, s);
-  const { diag, order } = s;
   for (let j = 0; j < n; j++) {
     const src = order[j] * n;
     values[j] = diag[order[j]];
-    for (let k = 0; k < n; k++) vecRe[k * n + j] = rows[src + k];
+    for (let k = 0; k < n; k++) {
+      vecRe[k * n + j] = vectorsRe[src + k];
+      vecIm[k * n + j] = vectorsIm[src + k];
+    }
   }
-  backTransformVectors(n, re, im, vecRe, vecIm, s);
 }
 
 /** Stable insertion sort of indices by eigenvalue (n is small: the cost is far below the O(n³) reduction). */
