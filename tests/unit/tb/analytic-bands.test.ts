@@ -86,7 +86,7 @@ describe("cubic s bands", () => {
   // E = ε + 2t Σ cos k_i a, width 12|t|; bcc E = ε + 8t cos(k_x a/2) cos(k_y a/2) cos(k_z a/2), width 16|t|;
   // fcc E = ε + 4t Σ_{i<j} cos(k_i a/2) cos(k_j a/2), from 12t at Γ to −4t at X, width 16|t|.
   const a = 4, t = -0.9;
-  const cases: { name: string; vectors: number[][]; nn: number; width: number; formula: (k: number[]) => number }[] = [
+  const cases: { name: string; vectors: [number, number, number][]; nn: number; width: number; formula: (k: number[]) => number }[] = [
     { name: "simple cubic", vectors: [[a, 0, 0], [0, a, 0], [0, 0, a]], nn: a, width: 12, formula: (k) => 2 * t * k.reduce((s, x) => s + Math.cos(x * a), 0) },
     {
       name: "bcc", vectors: [[-a / 2, a / 2, a / 2], [a / 2, -a / 2, a / 2], [a / 2, a / 2, -a / 2]], nn: (a * Math.sqrt(3)) / 2, width: 16,

@@ -59,7 +59,7 @@ describe("Slater–Koster table (Slater & Koster, Phys. Rev. 94, 1498 (1954), Ta
     const onsite = Object.fromEntries(all.map((o) => [o, shellEnergy[o === "s" || o === "s*" ? o : o[0] === "p" ? "p" : "d"]]));
     const base = (rot: (v: number[]) => number[]): ModelDocument =>
       buildDocument({
-        lattice: { dimension: 3, vectors: FCC(a).map(rot) },
+        lattice: { dimension: 3, vectors: FCC(a).map(rot) as [number, number, number][] },
         sites: [
           { label: "A1", species: "A", position: rot([0, 0, 0]) as [number, number, number], orbitals: [...all] },
           { label: "B1", species: "B", position: rot([a / 4, a / 4, a / 4]) as [number, number, number], orbitals: [...all] },

@@ -19,4 +19,4 @@ export function buildDocument(parts: Partial1): ModelDocument {
   };
 }
 
-export const FCC = (a: number): number[][] => [[0, a / 2, a / 2], [a / 2, 0, a / 2], [a / 2, a / 2, 0]];
+export const FCC = (a: number): [number, number, number][] => [[0, a / 2, a / 2], [a / 2, 0, a / 2], [a / 2, a / 2, 0]];
