@@ -3,12 +3,17 @@ import type { ModelDocument } from "@/lib/tb/document";
 import { computeBands } from "@/lib/tb/bands";
 import { compileModel } from "@/lib/tb/model";
 import { runDocumentChecks } from "@/lib/tb/analysis/checks";
+import type { CheckResult } from "@/lib/tb/analysis/check-result";
 import { checkHermiticity, checkTimeReversal, checkTraceSumRule } from "@/lib/tb/analysis/checks-symmetry";
 import { checkOutermostShell } from "@/lib/tb/analysis/checks-shells";
 import { monkhorstPackMesh } from "@/lib/tb/analysis/mesh";
 import { honeycombDocument, spChainDocument, zincBlendeDocument } from "./documents";
 
-const byId = (results: { id: string }[], id: string) => results.find((r) => r.id === id) as { status: string; measured: number | null; detail: string };
+const byId = (results: CheckResult[], id: string): CheckResult => {
+  const found = results.find((r) => r.id === id);
+  if (!found) throw new Error(`no check ${id}`);
+  return found;
+};
 
 describe("document checks", () => {
   it("pass for a valid zinc-blende sp3 model, with the trace sum rule at Σ on-site energies", () => {
