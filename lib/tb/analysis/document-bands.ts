@@ -6,6 +6,7 @@ import { compareBandSets, type BandDifference } from "./compare";
 import { compareWithReference, type ReferenceBands, type ReferenceCompareOptions, type ReferenceComparison } from "./compare-reference";
 import { computeDos, type DosOptions, type DosResult } from "./dos";
 import { findFermiLevel, type FermiMethod, type FermiResult } from "./fermi";
+import { compareFreeElectron, type FreeElectronResult } from "./free-electron";
 import { monkhorstPackMesh } from "./mesh";
 import { createEnergySolver, defaultMeshDivisions, spinDegeneracyOf } from "./model-solver";
 
@@ -56,4 +57,13 @@ export function findDocumentFermiLevel(doc: ModelDocument, opts: MeshChoice & { 
     method: opts.method,
     sigma: opts.sigma,
   });
+}
+
+/** Free-electron comparison of the lowest band along the document's default path (fit radius in Å⁻¹). */
+export function compareDocumentFreeElectron(doc: ModelDocument, radius?: number, pointsTotal?: number): FreeElectronResult & { path: SampledPath } {
+  const model = compileModel(doc);
+  const path = samplePath(doc, pointsTotal);
+  const energies = computeBands(model, path.kFrac).energies.map((row) => row[0]);
+  const gammaEnergy = createEnergySolver(model)(new Array<number>(model.dimension).fill(0))[0];
+  return { ...compareFreeElectron({ kFrac: path.kFrac, energies, gammaEnergy, reciprocal: model.reciprocal, radius }), path };
 }

@@ -3,8 +3,10 @@ import { computeBands } from "@/lib/tb/bands";
 import { compileModel } from "@/lib/tb/model";
 import { samplePath } from "@/lib/tb/kpath";
 import { integrateDos } from "@/lib/tb/analysis/dos";
+import { HBAR2_OVER_2ME } from "@/lib/tb/analysis/constants";
 import {
   compareDocuments,
+  compareDocumentFreeElectron,
   compareDocumentWithReference,
   computeDocumentDos,
   findDocumentFermiLevel,
@@ -40,5 +42,17 @@ describe("document-level band analysis", () => {
     const res = compareDocumentWithReference(doc, reference, { alignment: "fermi", referenceFermi: -0.7 });
     expect(res.shift).toBeCloseTo(0.7, 5);
     expect(res.rms).toBeLessThan(1e-5);
+  });
+
+  it("fits m* of the lowest chain band near Γ: ħ²/(2mₑ)/(−t·a²) from E ≈ ε + 2t − t·a²k² (Taylor expansion)", () => {
+    const t = -1.5, a = 2.5;
+    const radius = 0.1;
+    const res = compareDocumentFreeElectron(sChainDocument(0.5, t, a), radius, 401);
+    expect(res.pointsUsed).toBeGreaterThan(3);
+    // The next Taylor term, +t·a⁴k⁴/12, lowers the fitted curvature by at most (a·radius)²/12 relative.
+    const m0 = HBAR2_OVER_2ME / (-t * a * a);
+    expect(res.massRatio).toBeGreaterThan(m0);
+    expect((res.massRatio - m0) / m0).toBeLessThan((a * radius) ** 2 / 12);
+    expect(res.deviation[0]).toBeCloseTo(0, 12);
   });
 });

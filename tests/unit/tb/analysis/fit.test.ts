@@ -95,4 +95,14 @@ describe("Levenberg–Marquardt band fit", () => {
     await expect(fitBandModel(dimer, ["v", "w"], [1, 0.3], onePoint)).rejects.toBeInstanceOf(FitInputError);
     await expect(fitBandModel(dimer, ["v", "w"], [1, 0.3], onePoint)).rejects.toThrow(/1 reference points for 2 free parameters/);
   });
+
+  it("honours per-band weights (weight 0 drops a band) and reports 'not converged' with the best point so far", async () => {
+    const ref = syntheticReference(9);
+    const weighted = await fitBandModel(dimer, ["v", "w"], [1.0, 0.3], ref, { bandWeights: { 1: 0 } });
+    expect(weighted.perBand.map((b) => b.modelBand)).toEqual([0]);
+    const startCost = (await fitBandModel(dimer, ["v", "w"], [1.0, 0.3], ref, { maxIterations: 0 })).cost;
+    const short = await fitBandModel(dimer, ["v", "w"], [1.0, 0.3], ref, { maxIterations: 1 });
+    expect(short.status).toBe("not converged");
+    expect(short.cost).toBeLessThan(startCost);
+  });
 });
