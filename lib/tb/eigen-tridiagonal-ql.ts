@@ -1,19 +1,23 @@
 /*
- * Eigenvalues (and eigenvectors) of a real symmetric tridiagonal matrix by implicit QL with Wilkinson shifts.
- * Values only: the square-root-free Pal–Walker–Kahan variant (Parlett, "The Symmetric Eigenvalue Problem",
- * 1980/1998, §8.15; as in LAPACK dsterf). With vectors: the implicit QL sweep of Wilkinson & Reinsch,
- * Handbook for Automatic Computation vol. II (1971), contribution II/3 (tql2); Golub & Van Loan,
- * "Matrix Computations", 4th ed. (2013), §8.3.
+ * Eigenvalues of a real symmetric tridiagonal matrix by implicit QL with Wilkinson shifts, in the
+ * square-root-free Pal–Walker–Kahan form (Parlett, "The Symmetric Eigenvalue Problem", SIAM 1998, §8.15;
+ * the same recurrence as LAPACK dsterf), plus helpers shared with the eigenvector variant.
  * diag[0..n−1] is the diagonal, off[i] couples i and i+1; both are overwritten, eigenvalues end up in diag
  * (unordered). The matrix is first scaled by a power of two to a norm near 1 so that squares neither
  * overflow nor underflow; the scaling is exact and undone at the end.
  */
 
 const EPS = Number.EPSILON;
-const SWEEPS_PER_EIGENVALUE = 30;
+export const SWEEPS_PER_EIGENVALUE = 30;
 
 export function tridiagonalEigenvalues(n: number, diag: Float64Array, off: Float64Array): void {
   const scale = normalise(n, diag, off);
+  eigenvaluesOfNormalised(n, diag, off);
+  unscale(n, diag, scale);
+}
+
+/** PWK QL on a matrix already scaled by `normalise`. */
+export function eigenvaluesOfNormalised(n: number, diag: Float64Array, off: Float64Array): void {
   for (let i = 0; i < n - 1; i++) off[i] *= off[i];
   const maxSweeps = SWEEPS_PER_EIGENVALUE * n;
   let sweeps = 0;
@@ -55,70 +59,10 @@ export function tridiagonalEigenvalues(n: number, diag: Float64Array, off: Float
     off[l] = s * p;
     diag[l] = sigma + gamma;
   }
-  unscale(n, diag, scale);
-}
-
-/** Also rotates the rows of the row-major n×n `rows` (row j ends as the eigenvector of diag[j]). */
-export function tridiagonalEigenvectors(n: number, diag: Float64Array, off: Float64Array, rows: Float64Array): void {
-  const scale = normalise(n, diag, off);
-  const maxSweeps = SWEEPS_PER_EIGENVALUE * n;
-  let sweeps = 0;
-  let l = 0;
-  while (l < n) {
-    const m = findSplit(l, n, diag, off, false);
-    if (m === l) {
-      l++;
-      continue;
-    }
-    if (++sweeps > maxSweeps) throw notConverged(maxSweeps);
-    let g = (diag[l + 1] - diag[l]) / (2 * off[l]);
-    let r = Math.sqrt(g * g + 1);
-    g = diag[m] - diag[l] + off[l] / (g + (g >= 0 ? r : -r));
-    let s = 1;
-    let c = 1;
-    let p = 0;
-    let i = m - 1;
-    for (; i >= l; i--) {
-      const f = s * off[i];
-      const b = c * off[i];
-      r = Math.sqrt(f * f + g * g);
-      off[i + 1] = r;
-      if (r === 0) break;
-      s = f / r;
-      c = g / r;
-      g = diag[i + 1] - p;
-      r = (diag[i] - g) * s + 2 * c * b;
-      p = s * r;
-      diag[i + 1] = g + p;
-      g = c * r - b;
-      rotateRows(n, rows, i, c, s);
-    }
-    if (i >= l) {
-      // Underflow in the rotation: the block has split at i; restart the search from l.
-      diag[i + 1] -= p;
-      off[m] = 0;
-      continue;
-    }
-    diag[l] -= p;
-    off[l] = g;
-    off[m] = 0;
-  }
-  unscale(n, diag, scale);
-}
-
-function rotateRows(n: number, rows: Float64Array, i: number, c: number, s: number): void {
-  const a = i * n;
-  const b = a + n;
-  for (let k = 0; k < n; k++) {
-    const x = rows[a + k];
-    const y = rows[b + k];
-    rows[b + k] = s * x + c * y;
-    rows[a + k] = c * x - s * y;
-  }
 }
 
 /** First m ≥ l with a negligible off[m] (relative to its diagonal neighbours); n−1 if none. */
-function findSplit(l: number, n: number, diag: Float64Array, off: Float64Array, squared: boolean): number {
+export function findSplit(l: number, n: number, diag: Float64Array, off: Float64Array, squared: boolean): number {
   let m = l;
   for (; m < n - 1; m++) {
     const t = EPS * (Math.abs(diag[m]) + Math.abs(diag[m + 1]));
@@ -149,7 +93,7 @@ function solveTwoByTwo(l: number, diag: Float64Array, b2: number): void {
   }
 }
 
-function normalise(n: number, diag: Float64Array, off: Float64Array): number {
+export function normalise(n: number, diag: Float64Array, off: Float64Array): number {
   let norm = 0;
   for (let i = 0; i < n; i++) {
     const a = Math.abs(diag[i]);
@@ -167,12 +111,12 @@ function normalise(n: number, diag: Float64Array, off: Float64Array): number {
   return scale;
 }
 
-function unscale(n: number, diag: Float64Array, scale: number): void {
+export function unscale(n: number, diag: Float64Array, scale: number): void {
   if (scale === 1) return;
   const inv = 1 / scale;
   for (let i = 0; i < n; i++) diag[i] *= inv;
 }
 
-function notConverged(maxSweeps: number): Error {
+export function notConverged(maxSweeps: number): Error {
   return new Error(`eigen: tridiagonal QL iteration did not converge within ${maxSweeps} sweeps`);
 }

@@ -1,6 +1,7 @@
 import { backTransformRows } from "./eigen-back-transform";
 import { reduceHermitianToTridiagonal } from "./eigen-householder";
-import { tridiagonalEigenvalues, tridiagonalEigenvectors } from "./eigen-tridiagonal-ql";
+import { tridiagonalEigenvalues } from "./eigen-tridiagonal-ql";
+import { tridiagonalEigenvectors } from "./eigen-tridiagonal-vectors";
 import { assertSize, scratchFor, type EigenWorkspace, type HermitianScratch } from "./eigen-workspace";
 
 /*
@@ -47,7 +48,7 @@ export function eigHermitian(
   const { vectorsRe, vectorsIm, diag, order } = s;
   vectorsRe.fill(0);
   for (let i = 0; i < n; i++) vectorsRe[i * n + i] = 1;
-  tridiagonalEigenvectors(n, diag, s.off, vectorsRe);
+  tridiagonalEigenvectors(n, diag, s.off, vectorsRe, s.tmpRe, s.tmpIm);
   backTransformRows(n, re, im, vectorsRe, vectorsIm, s);
   sortOrder(n, s);
   for (let j = 0; j < n; j++) {
