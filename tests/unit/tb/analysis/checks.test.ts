@@ -81,4 +81,14 @@ describe("document checks", () => {
     expect(res.status).toBe("pass");
     expect(checkOutermostShell(doc, k, undefined, 0.01).status).toBe("warn");
   });
+
+  it("keeps time reversal and the trace rule with spin–orbit (Kramers; L·S is traceless), and catches unequal sp/ps in one species", () => {
+    const soc = runDocumentChecks(zincBlendeDocument({}, { A: 0.12, B: 0.34 }));
+    for (const id of ["hermiticity", "time-reversal", "trace-sum-rule"]) expect(byId(soc, id).status, id).toBe("pass");
+    // Σ on-site, both spin blocks: 2 × 2.8 eV.
+    expect(byId(soc, "trace-sum-rule").detail).toMatch(/Σ on-site = 5\.60000/);
+    const bad: ModelDocument = structuredClone(spChainDocument());
+    bad.shells[0].params.ps_sigma = 0.4;
+    expect(byId(runDocumentChecks(bad), "hermiticity").status).toBe("fail");
+  });
 });
