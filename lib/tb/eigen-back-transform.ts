@@ -9,17 +9,17 @@ import type { HermitianScratch } from "./eigen-workspace";
  * both along contiguous memory; two vectors share each pass over a reflector.
  */
 
-/** Rows of (vecRe, vecIm): on entry real tridiagonal eigenvectors z in vecRe; on exit Q D z. */
-export function backTransformRows(
-  n: number, re: Float64Array, im: Float64Array, vecRe: Float64Array, vecIm: Float64Array, s: HermitianScratch,
-): void {
-  const { phaseRe, phaseIm, reflectorNorm } = s;
-  for (let j = 0; j < n; j++) {
-    const rj = j * n;
-    for (let k = 0; k < n; k++) {
-      const z = vecRe[rj + k];
-      vecRe[rj + k] = phaseRe[k] * z;
-      vecIm[rj + k] = phaseIm[k] * z;
+/** Row j of (s.vectorsRe, s.vectorsIm) becomes Q D z_j, where z_j is column j of the real row-major `z`. */
+export function backTransformRows(n: number, re: Float64Array, im: Float64Array, z: Float64Array, s: HermitianScratch): void {
+  const { phaseRe, phaseIm, reflectorNorm, vectorsRe: vecRe, vectorsIm: vecIm } = s;
+  for (let k = 0; k < n; k++) {
+    const dr = phaseRe[k];
+    const di = phaseIm[k];
+    const rk = k * n;
+    for (let j = 0; j < n; j++) {
+      const x = z[rk + j];
+      vecRe[j * n + k] = dr * x;
+      vecIm[j * n + k] = di * x;
     }
   }
   let j = 0;

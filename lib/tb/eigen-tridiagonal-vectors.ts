@@ -1,3 +1,4 @@
+import type { HermitianScratch } from "./eigen-workspace";
 import {
   eigenvaluesOfNormalised, findSplit, normalise, notConverged, SWEEPS_PER_EIGENVALUE, unscale,
 } from "./eigen-tridiagonal-ql";
@@ -6,6 +7,8 @@ import {
  * Eigenvectors of a real symmetric tridiagonal matrix: implicit QL sweeps whose plane rotations are
  * accumulated into the rows of `rows` (Wilkinson & Reinsch, Handbook for Automatic Computation vol. II (1971),
  * contribution II/3, tql2; Golub & Van Loan, "Matrix Computations", 4th ed. (2013), §8.3).
+ * The rotations of a sweep are recorded and then applied row by row of Z, carrying the running row through
+ * the chain, so each element is loaded and stored once per sweep instead of once per rotation.
  * The rotations dominate the cost, so the eigenvalues are first found by the cheap root-free QL and used as
  * shifts for the first two sweeps on each eigenvalue: an exact eigenvalue as shift deflates in one sweep in
  * exact arithmetic (Parlett, "The Symmetric Eigenvalue Problem", SIAM 1998, ch. 8 — from memory), which
@@ -15,12 +18,15 @@ import {
 const PERFECT_SHIFT_TRIES = 2;
 
 /**
- * diag/off as in tridiagonalEigenvalues; row j of the row-major n×n `rows` is rotated along, so starting from
- * the identity it ends as the eigenvector of diag[j]. `shifts` and `spare` are length-n scratch vectors.
+ * diag/off as in tridiagonalEigenvalues; the row-major n×n `z` is rotated along, so starting from the identity
+ * its column j ends as the eigenvector of diag[j]. Uses s.tmpRe, s.tmpIm, s.rotCos and s.rotSin as scratch.
  */
 export function tridiagonalEigenvectors(
-  n: number, diag: Float64Array, off: Float64Array, rows: Float64Array, shifts: Float64Array, spare: Float64Array,
+  n: number, diag: Float64Array, off: Float64Array, z: Float64Array, s: HermitianScratch,
 ): void {
+  const shifts = s.tmpRe;
+  const spare = s.tmpIm;
+  const { rotCos, rotSin } = s;
   const scale = normalise(n, diag, off);
   shifts.set(diag);
   spare.set(off);
@@ -43,25 +49,27 @@ export function tridiagonalEigenvectors(
     let shift = diag[l] - off[l] / (g + (g >= 0 ? r : -r));
     if (tries++ < PERFECT_SHIFT_TRIES) shift = nearest(n, shifts, shift);
     g = diag[m] - shift;
-    let s = 1;
+    let sn = 1;
     let c = 1;
     let p = 0;
     let i = m - 1;
     for (; i >= l; i--) {
-      const f = s * off[i];
+      const f = sn * off[i];
       const b = c * off[i];
       r = Math.sqrt(f * f + g * g);
       off[i + 1] = r;
       if (r === 0) break;
-      s = f / r;
+      sn = f / r;
       c = g / r;
       g = diag[i + 1] - p;
-      r = (diag[i] - g) * s + 2 * c * b;
-      p = s * r;
+      r = (diag[i] - g) * sn + 2 * c * b;
+      p = sn * r;
       diag[i + 1] = g + p;
       g = c * r - b;
-      rotateRows(n, rows, i, c, s);
+      rotCos[i] = c;
+      rotSin[i] = sn;
     }
+    if (i + 1 < m) applySweep(n, z, i + 1, m, rotCos, rotSin);
     if (i >= l) {
       // Underflow in the rotation: the block has split at i; restart the search from l.
       diag[i + 1] -= p;
@@ -75,14 +83,36 @@ export function tridiagonalEigenvectors(
   unscale(n, diag, scale);
 }
 
-function rotateRows(n: number, rows: Float64Array, i: number, c: number, s: number): void {
-  const a = i * n;
-  const b = a + n;
-  for (let k = 0; k < n; k++) {
-    const x = rows[a + k];
-    const y = rows[b + k];
-    rows[b + k] = s * x + c * y;
-    rows[a + k] = c * x - s * y;
+/** Applies the rotations i = m−1 down to lo (each mixing columns i and i+1) to every row of z. */
+function applySweep(n: number, z: Float64Array, lo: number, m: number, rotCos: Float64Array, rotSin: Float64Array): void {
+  let k = 0;
+  for (; k + 1 < n; k += 2) {
+    const a = k * n;
+    const b = a + n;
+    let carryA = z[a + m];
+    let carryB = z[b + m];
+    for (let i = m - 1; i >= lo; i--) {
+      const c = rotCos[i];
+      const sn = rotSin[i];
+      const xa = z[a + i];
+      const xb = z[b + i];
+      z[a + i + 1] = sn * xa + c * carryA;
+      z[b + i + 1] = sn * xb + c * carryB;
+      carryA = c * xa - sn * carryA;
+      carryB = c * xb - sn * carryB;
+    }
+    z[a + lo] = carryA;
+    z[b + lo] = carryB;
+  }
+  if (k < n) {
+    const a = k * n;
+    let carry = z[a + m];
+    for (let i = m - 1; i >= lo; i--) {
+      const x = z[a + i];
+      z[a + i + 1] = rotSin[i] * x + rotCos[i] * carry;
+      carry = rotCos[i] * x - rotSin[i] * carry;
+    }
+    z[a + lo] = carry;
   }
 }
 

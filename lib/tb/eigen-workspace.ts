@@ -23,6 +23,9 @@ export class HermitianScratch implements EigenWorkspace {
   /** Eigenvectors, one per row (keeps QL rotations and reflector applications on contiguous memory). */
   readonly vectorsRe: Float64Array;
   readonly vectorsIm: Float64Array;
+  /** Cosines and sines of one QL sweep, applied to the eigenvectors after the sweep. */
+  readonly rotCos: Float64Array;
+  readonly rotSin: Float64Array;
   readonly order: Int32Array;
 
   constructor(n: number) {
@@ -39,6 +42,8 @@ export class HermitianScratch implements EigenWorkspace {
     this.tmp2Im = new Float64Array(n);
     this.vectorsRe = new Float64Array(n * n);
     this.vectorsIm = new Float64Array(n * n);
+    this.rotCos = new Float64Array(n);
+    this.rotSin = new Float64Array(n);
     this.order = new Int32Array(n);
   }
 }

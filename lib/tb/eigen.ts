@@ -45,12 +45,13 @@ export function eigHermitian(
   checkLength("vecIm", vecIm, n * n);
   const s = scratchFor(n, ws);
   reduceHermitianToTridiagonal(n, re, im, s);
-  const { vectorsRe, vectorsIm, diag, order } = s;
-  vectorsRe.fill(0);
-  for (let i = 0; i < n; i++) vectorsRe[i * n + i] = 1;
-  tridiagonalEigenvectors(n, diag, s.off, vectorsRe, s.tmpRe, s.tmpIm);
-  backTransformRows(n, re, im, vectorsRe, vectorsIm, s);
+  const { diag, order } = s;
+  vecRe.fill(0);
+  for (let i = 0; i < n; i++) vecRe[i * n + i] = 1;
+  tridiagonalEigenvectors(n, diag, s.off, vecRe, s);
+  backTransformRows(n, re, im, vecRe, s);
   sortOrder(n, s);
+  const { vectorsRe, vectorsIm } = s;
   for (let j = 0; j < n; j++) {
     const src = order[j] * n;
     values[j] = diag[order[j]];
