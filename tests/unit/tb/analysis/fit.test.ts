@@ -63,6 +63,13 @@ describe("Levenberg–Marquardt band fit", () => {
     res.values.forEach((x, i) => expect(x).toBeCloseTo(truth[i], 1));
   });
 
+  it("aligns valence-band maxima during the fit ('vbm' alignment)", async () => {
+    const res = await fitBandModel(dimer, ["v", "w"], [1.0, 0.3], syntheticReference(13, 0.8), { alignment: "vbm", occupiedBands: 1 });
+    expect(res.status).toBe("converged");
+    expect(res.shift).toBeCloseTo(-0.8, 1);
+    res.values.forEach((x, i) => expect(x).toBeCloseTo(truth[i], 1));
+  });
+
   it("keeps parameters inside their bounds (projection)", async () => {
     const res = await fitBandModel(dimer, ["v", "w"], [1.0, 0.3], syntheticReference(5), { upper: [1.2, 2] });
     expect(res.values[0]).toBeLessThanOrEqual(1.2);

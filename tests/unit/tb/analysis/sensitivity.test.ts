@@ -3,7 +3,7 @@ import { computeBands } from "@/lib/tb/bands";
 import { compileModel } from "@/lib/tb/model";
 import { listParameters, setParameters } from "@/lib/tb/parameters";
 import type { ModelDocument } from "@/lib/tb/document";
-import { computeSensitivity } from "@/lib/tb/analysis/sensitivity";
+import { computeSensitivity, summariseSensitivity } from "@/lib/tb/analysis/sensitivity";
 import { estimateParameterChange } from "@/lib/tb/analysis/parameter-change";
 import { sChainDocument, zincBlendeDocument } from "./documents";
 
@@ -23,6 +23,16 @@ describe("sensitivity ∂E/∂p (Hellmann–Feynman: Feynman, Phys. Rev. 56, 340
       expect(res.derivatives[i][jt]).toBeCloseTo(2 * Math.cos(2 * Math.PI * x), 10);
       expect(res.derivatives[i][je]).toBeCloseTo(1, 10);
     });
+  });
+
+  it("summarises the largest |∂E/∂p| per parameter in a window (chain: |2cos 2πk| ≤ 2, reached at Γ)", () => {
+    const res = computeSensitivity(sChainDocument(0.5, -1), [[0], [0.2], [0.5]]);
+    const summary = Object.fromEntries(summariseSensitivity(res).map((s) => [s.key, s.maxAbsDerivative]));
+    expect(summary["shell/A-A/1/ss_sigma"]).toBeCloseTo(2, 12);
+    expect(summary["onsite/A/s"]).toBeCloseTo(1, 12);
+    // Window [−1, 0] eV keeps only k = 0.2 (E = 0.5 − 2cos 0.4π ≈ −0.118 eV; Γ at −1.5 and X at 2.5 fall outside).
+    const windowed = summariseSensitivity(res, [-1, 0]).find((s) => s.key === "shell/A-A/1/ss_sigma");
+    expect(windowed?.maxAbsDerivative).toBeCloseTo(2 * Math.cos(0.4 * Math.PI), 12);
   });
 
   it("agrees with central finite differences for every parameter of a zinc-blende sp3 model, with and without spin–orbit", () => {
