@@ -102,7 +102,7 @@ build_if_needed() {
   local stamp=.next/bandgate-source-hash
   local hash
   hash=$( { git ls-files -co --exclude-standard -- app board db lib mail public proxy.ts next.config.ts \
-      postcss.config.mjs tsconfig.json package-lock.json 2>/dev/null | sort | xargs -r sha1sum; } | sha1sum | cut -c1-40)
+      postcss.config.mjs tsconfig.json tsconfig.build.json package-lock.json 2>/dev/null | sort | xargs -r sha1sum; } | sha1sum | cut -c1-40)
   if [ -f .next/BUILD_ID ] && [ -f "$stamp" ] && [ "$(cat "$stamp")" = "$hash" ]; then
     log "build is up to date"
   else

@@ -41,6 +41,6 @@ if [ "$DEV" -eq 1 ]; then
 else
   build_if_needed
   log "serving on http://localhost:$PORT (Ctrl-C stops everything this command started)"
-  node_modules/.bin/next start -p "$PORT" & CHILDREN+=($!)
+  node_modules/.bin/next start -p "$PORT" -H "${HOST:-127.0.0.1}" & CHILDREN+=($!)
 fi
 wait "${CHILDREN[-1]}"

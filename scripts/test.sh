@@ -34,6 +34,7 @@ wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; e
 build_if_needed
 
 status=0
+log "type check (tsc)"; npx tsc --noEmit -p tsconfig.json || status=1
 log "unit tests"; npx vitest run --project unit || status=1
 log "integration tests (PostgreSQL on 127.0.0.1:$TEST_PG_PORT)"; npx vitest run --project integration || status=1
 log "browser end-to-end tests (Debian Chromium)"; CI=1 npx playwright test || status=1

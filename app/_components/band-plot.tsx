@@ -15,6 +15,17 @@ const STYLE: Record<BandSeriesRole, { stroke: string; dash?: string; width: numb
   reference: { stroke: "var(--color-violet-dot)", width: 0 },
 };
 
+/** Two labels at one distance (a break in the path, e.g. U and K) share one line: "U|K". */
+function mergeTicks(distance: number[], ticks: { index: number; label: string }[]) {
+  const merged: { index: number; label: string }[] = [];
+  for (const t of ticks) {
+    const last = merged[merged.length - 1];
+    if (last && distance[last.index] === distance[t.index]) last.label = `${last.label}|${t.label}`;
+    else merged.push({ ...t });
+  }
+  return merged;
+}
+
 const W = 760;
 const H = 420;
 const M = { left: 56, right: 16, top: 16, bottom: 34 };
@@ -49,7 +60,7 @@ export function BandPlot({
             </text>
           </g>
         ))}
-        {ticks.map((t) => (
+        {mergeTicks(distance, ticks).map((t) => (
           <g key={`${t.index}-${t.label}`}>
             <line x1={x(distance[t.index])} x2={x(distance[t.index])} y1={M.top} y2={H - M.bottom} stroke="var(--color-ink-soft)" strokeWidth={0.6} />
             <text x={x(distance[t.index])} y={H - M.bottom + 18} textAnchor="middle" fontSize={13} fill="var(--color-ink)">

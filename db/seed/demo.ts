@@ -26,14 +26,14 @@ export const DEMO_FAMILIES = [
   {
     slug: "honeycomb-pz",
     title: "Honeycomb pz sheet (demo)",
-    description: "A two-dimensional honeycomb sheet with one pz orbital per site and first- and second-neighbour hopping. Invented values.",
+    description: "A two-dimensional honeycomb sheet with one pz orbital per site and nearest-neighbour hopping. Invented values.",
     dimension: 2,
     documentFile: "demo-honeycomb-pz",
   },
   {
     slug: "diamond-sp3s",
     title: "Diamond-lattice sp3s* (demo)",
-    description: "A three-dimensional two-species diamond-lattice model with s, p and excited s* orbitals, nearest neighbours only. Invented values.",
+    description: "A three-dimensional diamond-lattice model with s, p and an excited s* orbital on each of the two sites, nearest neighbours only. Invented values.",
     dimension: 3,
     documentFile: "demo-diamond-sp3s",
   },

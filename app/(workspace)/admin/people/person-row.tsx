@@ -15,7 +15,7 @@ export interface PersonView {
 
 export function PersonRow({ person, isSelf }: { person: PersonView; isSelf: boolean }) {
   return (
-    <li className="grid gap-3 px-4 py-4 md:grid-cols-[14rem_1fr_auto]" data-testid={`person-${person.email}`}>
+    <li className="grid gap-3 px-4 py-4 md:grid-cols-[17rem_1fr_auto]" data-testid={`person-${person.email}`}>
       <div>
         <div className="font-semibold">
           {person.name} {isSelf ? <span className="text-xs font-normal text-ink-soft">(you)</span> : null}
