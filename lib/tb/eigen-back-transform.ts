@@ -5,8 +5,9 @@ import type { HermitianScratch } from "./eigen-workspace";
  * phase and Q = P_{n−1}⋯P_2 the product of the stored Householder reflectors (EISPACK htribk; Wilkinson &
  * Reinsch, Handbook for Automatic Computation vol. II (1971), II/2; Golub & Van Loan, "Matrix Computations",
  * 4th ed. (2013), §5.1.6 and §8.3.1).
- * Vectors are held one per row, so each reflector costs a dot product accumulated in registers plus an axpy,
- * both along contiguous memory; two vectors share each pass over a reflector.
+ * Vectors are held one per row and processed two at a time. Applying P_i = I − w wᴴ/h to a vector x is a
+ * dot product wᴴx (kept in registers) and an axpy; the axpy of P_i is fused with the dot product of P_{i+1},
+ * so each reflector costs one pass over the vector instead of two.
  */
 
 /** Row j of (s.vectorsRe, s.vectorsIm) becomes Q D z_j, where z_j is column j of the real row-major `z`. */
@@ -22,71 +23,64 @@ export function backTransformRows(n: number, re: Float64Array, im: Float64Array,
       vecIm[j * n + k] = di * x;
     }
   }
-  let j = 0;
-  for (; j + 1 < n; j += 2) {
+  if (n < 3) return;
+  for (let j = 0; j < n; j += 2) {
     const a = j * n;
-    const b = a + n;
-    for (let i = 2; i < n; i++) {
-      const h = reflectorNorm[i];
-      if (h === 0) continue;
-      const row = i * n;
-      let ar = 0;
-      let ai = 0;
-      let br = 0;
-      let bi = 0;
-      for (let k = 0; k < i; k++) {
-        const vr = re[row + k];
-        const vi = im[row + k];
-        const xr = vecRe[a + k];
-        const xi = vecIm[a + k];
-        const yr = vecRe[b + k];
-        const yi = vecIm[b + k];
-        ar += vr * xr + vi * xi;
-        ai += vr * xi - vi * xr;
-        br += vr * yr + vi * yi;
-        bi += vr * yi - vi * yr;
-      }
-      const inv = 1 / h;
-      ar *= inv;
-      ai *= inv;
-      br *= inv;
-      bi *= inv;
-      for (let k = 0; k < i; k++) {
-        const vr = re[row + k];
-        const vi = im[row + k];
-        vecRe[a + k] -= vr * ar - vi * ai;
-        vecIm[a + k] -= vr * ai + vi * ar;
-        vecRe[b + k] -= vr * br - vi * bi;
-        vecIm[b + k] -= vr * bi + vi * br;
-      }
-    }
-  }
-  if (j < n) applyReflectorsToRow(n, j * n, re, im, vecRe, vecIm, reflectorNorm);
-}
-
-function applyReflectorsToRow(
-  n: number, a: number, re: Float64Array, im: Float64Array, vecRe: Float64Array, vecIm: Float64Array,
-  reflectorNorm: Float64Array,
-): void {
-  for (let i = 2; i < n; i++) {
-    const h = reflectorNorm[i];
-    if (h === 0) continue;
-    const row = i * n;
+    // With an odd count the last vector is paired with itself: every write below stores identical values.
+    const b = j + 1 < n ? a + n : a;
+    let row = 2 * n;
     let ar = 0;
     let ai = 0;
-    for (let k = 0; k < i; k++) {
-      const vr = re[row + k];
-      const vi = im[row + k];
-      ar += vr * vecRe[a + k] + vi * vecIm[a + k];
-      ai += vr * vecIm[a + k] - vi * vecRe[a + k];
+    let br = 0;
+    let bi = 0;
+    for (let k = 0; k < 2; k++) {
+      const wr = re[row + k];
+      const wi = im[row + k];
+      ar += wr * vecRe[a + k] + wi * vecIm[a + k];
+      ai += wr * vecIm[a + k] - wi * vecRe[a + k];
+      br += wr * vecRe[b + k] + wi * vecIm[b + k];
+      bi += wr * vecIm[b + k] - wi * vecRe[b + k];
     }
-    ar /= h;
-    ai /= h;
-    for (let k = 0; k < i; k++) {
-      const vr = re[row + k];
-      const vi = im[row + k];
-      vecRe[a + k] -= vr * ar - vi * ai;
-      vecIm[a + k] -= vr * ai + vi * ar;
+    for (let i = 2; i < n; i++) {
+      // h = 0 marks a skipped reflector, whose stored w is then zero too.
+      const h = reflectorNorm[i];
+      const inv = h > 0 ? 1 / h : 0;
+      const tar = ar * inv;
+      const tai = ai * inv;
+      const tbr = br * inv;
+      const tbi = bi * inv;
+      // The last reflector has no successor: its "next" dot product reads itself and is discarded.
+      const next = i + 1 < n ? row + n : row;
+      ar = 0;
+      ai = 0;
+      br = 0;
+      bi = 0;
+      for (let k = 0; k < i; k++) {
+        const wr = re[row + k];
+        const wi = im[row + k];
+        const xr = vecRe[a + k] - (wr * tar - wi * tai);
+        const xi = vecIm[a + k] - (wr * tai + wi * tar);
+        const yr = vecRe[b + k] - (wr * tbr - wi * tbi);
+        const yi = vecIm[b + k] - (wr * tbi + wi * tbr);
+        vecRe[a + k] = xr;
+        vecIm[a + k] = xi;
+        vecRe[b + k] = yr;
+        vecIm[b + k] = yi;
+        const ur = re[next + k];
+        const ui = im[next + k];
+        ar += ur * xr + ui * xi;
+        ai += ur * xi - ui * xr;
+        br += ur * yr + ui * yi;
+        bi += ur * yi - ui * yr;
+      }
+      if (i + 1 === n) break;
+      const ur = re[next + i];
+      const ui = im[next + i];
+      ar += ur * vecRe[a + i] + ui * vecIm[a + i];
+      ai += ur * vecIm[a + i] - ui * vecRe[a + i];
+      br += ur * vecRe[b + i] + ui * vecIm[b + i];
+      bi += ur * vecIm[b + i] - ui * vecRe[b + i];
+      row = next;
     }
   }
 }
