@@ -12,18 +12,18 @@ export const SWEEPS_PER_EIGENVALUE = 30;
 
 export function tridiagonalEigenvalues(n: number, diag: Float64Array, off: Float64Array): void {
   const scale = normalise(n, diag, off);
-  eigenvaluesOfNormalised(n, diag, off);
+  eigenvaluesOfNormalised(diag, off, 0, n);
   unscale(n, diag, scale);
 }
 
-/** PWK QL on a matrix already scaled by `normalise`. */
-export function eigenvaluesOfNormalised(n: number, diag: Float64Array, off: Float64Array): void {
-  for (let i = 0; i < n - 1; i++) off[i] *= off[i];
-  const maxSweeps = SWEEPS_PER_EIGENVALUE * n;
+/** PWK QL on rows from..to−1 (a block already scaled by `normalise`; off[to−1] is ignored). */
+export function eigenvaluesOfNormalised(diag: Float64Array, off: Float64Array, from: number, to: number): void {
+  for (let i = from; i < to - 1; i++) off[i] *= off[i];
+  const maxSweeps = SWEEPS_PER_EIGENVALUE * (to - from);
   let sweeps = 0;
-  let l = 0;
-  while (l < n) {
-    const m = findSplit(l, n, diag, off, true);
+  let l = from;
+  while (l < to) {
+    const m = findSplit(l, to, diag, off, true);
     if (m === l) {
       l++;
       continue;

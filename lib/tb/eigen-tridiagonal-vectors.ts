@@ -30,7 +30,7 @@ export function tridiagonalEigenvectors(
   const scale = normalise(n, diag, off);
   shifts.set(diag);
   spare.set(off);
-  eigenvaluesOfNormalised(n, shifts, spare);
+  eigenvaluesOfNormalised(shifts, spare, 0, n);
   sortAscending(n, shifts);
   const maxSweeps = SWEEPS_PER_EIGENVALUE * n;
   let sweeps = 0;
