@@ -27,6 +27,11 @@ export class HermitianScratch implements EigenWorkspace {
   readonly rotCos: Float64Array;
   readonly rotSin: Float64Array;
   readonly order: Int32Array;
+  /** Tridiagonal LU factors and iterate of inverse iteration. */
+  readonly solver: {
+    readonly u0: Float64Array; readonly u1: Float64Array; readonly u2: Float64Array;
+    readonly mult: Float64Array; readonly x: Float64Array; readonly pivot: Uint8Array;
+  };
 
   constructor(n: number) {
     assertSize(n);
@@ -45,6 +50,10 @@ export class HermitianScratch implements EigenWorkspace {
     this.rotCos = new Float64Array(n);
     this.rotSin = new Float64Array(n);
     this.order = new Int32Array(n);
+    this.solver = {
+      u0: new Float64Array(n), u1: new Float64Array(n), u2: new Float64Array(n),
+      mult: new Float64Array(n), x: new Float64Array(n), pivot: new Uint8Array(n),
+    };
   }
 }
 

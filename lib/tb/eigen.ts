@@ -1,5 +1,6 @@
 import { backTransformRows } from "./eigen-back-transform";
 import { reduceHermitianToTridiagonal } from "./eigen-householder";
+import { tridiagonalEigenvectorsByInverseIteration } from "./eigen-inverse-iteration";
 import { tridiagonalEigenvalues } from "./eigen-tridiagonal-ql";
 import { tridiagonalEigenvectors } from "./eigen-tridiagonal-vectors";
 import { assertSize, scratchFor, type EigenWorkspace, type HermitianScratch } from "./eigen-workspace";
@@ -46,9 +47,11 @@ export function eigHermitian(
   const s = scratchFor(n, ws);
   reduceHermitianToTridiagonal(n, re, im, s);
   const { diag, order } = s;
-  vecRe.fill(0);
-  for (let i = 0; i < n; i++) vecRe[i * n + i] = 1;
-  tridiagonalEigenvectors(n, diag, s.off, vecRe, s);
+  if (!tridiagonalEigenvectorsByInverseIteration(n, diag, s.off, vecRe, s)) {
+    vecRe.fill(0);
+    for (let i = 0; i < n; i++) vecRe[i * n + i] = 1;
+    tridiagonalEigenvectors(n, diag, s.off, vecRe, s);
+  }
   backTransformRows(n, re, im, vecRe, s);
   sortOrder(n, s);
   const { vectorsRe, vectorsIm } = s;
