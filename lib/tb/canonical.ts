@@ -41,9 +41,9 @@ export function documentHash(doc: ModelDocument): string {
 }
 
 /**
- * The parts of a document that change H(k): lattice, sites, on-site energies, shells, explicit hoppings,
- * spin–orbit strengths and the Bloch phase convention. Names, provenance, validity, k-path and the
- * electron count are left out, so metadata-only edits keep this hash.
+ * The parts of a document that change the physics: everything in H(k) (lattice, sites, on-site energies, shells,
+ * explicit hoppings, spin–orbit strengths, the Bloch phase convention) plus the electron count. Names, provenance,
+ * validity and k-path are left out, so metadata-only edits keep this hash.
  */
 export function physicsPart(doc: ModelDocument): unknown {
   return {
@@ -54,6 +54,8 @@ export function physicsPart(doc: ModelDocument): unknown {
     shells: doc.shells,
     hoppings: doc.hoppings ?? [],
     spinOrbit: doc.spinOrbit ?? {},
+    // Not part of H(k), but it moves the Fermi level and decides which gap is the gap, so approvals must lapse with it.
+    electronCount: doc.electronCount,
   };
 }
 

@@ -1,5 +1,6 @@
 import { computeBands } from "./bands";
-import { checkDocument } from "./cli-check";
+import { checkDocument, type CheckStep } from "./cli-check";
+import { runDocumentChecks } from "./analysis/checks";
 import { InputError, option, positional, readJsonFile, readKPoints, readModel } from "./cli-io";
 import { realSpaceHoppings } from "./hoppings";
 import { samplePath } from "./kpath";
@@ -10,6 +11,8 @@ const USAGE = `usage:
   tb path FILE.json [--points N]                    bands on the document's default k-path
   tb hoppings FILE.json                             real-space hopping list
   tb check FILE.json                                validation, conventions and checks`;
+
+const physicsChecks: CheckStep = (doc) => runDocumentChecks(doc).map(({ id, title, status, detail }) => ({ id, title, status, detail }));
 
 const rows = (energies: Float64Array[]) => energies.map((e) => Array.from(e));
 
@@ -39,7 +42,7 @@ async function run(args: string[]): Promise<number> {
       return 0;
     }
     case "check": {
-      const report = await checkDocument(readJsonFile(positional(rest), "model"));
+      const report = await checkDocument(readJsonFile(positional(rest), "model"), [physicsChecks]);
       print(report);
       if (!report.valid) return 2;
       return report.checks.some((c) => c.status === "fail") ? 1 : 0;
