@@ -2,7 +2,7 @@
  * One error vocabulary for the whole app: "<kind>:<subject>" codes, mapped to HTTP statuses by kind.
  * Only the message of an AppError reaches a user; anything else is logged and shown as a generic failure.
  */
-export type ErrorKind = "unauthenticated" | "forbidden" | "invalid" | "not-found" | "conflict" | "rate-limited" | "gone";
+export type ErrorKind = "unauthenticated" | "forbidden" | "invalid" | "not-found" | "conflict" | "refused" | "rate-limited" | "gone";
 
 export type ErrorCode = `${ErrorKind}:${string}`;
 
@@ -12,6 +12,7 @@ const STATUS: Record<ErrorKind, number> = {
   invalid: 400,
   "not-found": 404,
   conflict: 409,
+  refused: 422,
   "rate-limited": 429,
   gone: 410,
 };
