@@ -55,7 +55,7 @@ function solveBlock(
   n: number, lo: number, hi: number, d: Float64Array, e: Float64Array, lambda: Float64Array, z: Float64Array,
   s: HermitianScratch,
 ): boolean {
-  const { u0, u1, u2, mult, pivot, x } = s.solver;
+  const { u0, u1, u2, mult, swap, x } = s.solver;
   const size = hi - lo + 1;
   let norm1 = 0;
   for (let k = lo; k <= hi; k++) {
@@ -74,7 +74,7 @@ function solveBlock(
     if (j > lo && shift - lambda[j - 1] > clusterGap) clusterStart = j;
     if (shift - previousShift < minStep) shift = previousShift + minStep;
     previousShift = shift;
-    factor(lo, hi, d, e, shift, tiny, u0, u1, u2, mult, pivot);
+    factor(lo, hi, d, e, shift, tiny, u0, u1, u2, mult, swap);
     for (let k = lo; k <= hi; k++) {
       seed = (Math.imul(seed, 1664525) + 1013904223) >>> 0;
       x[k] = seed / 2147483648 - 1;
@@ -85,9 +85,9 @@ function solveBlock(
       // Right-hand side scaled as in dstein, so that reaching `target` means a residual of O(size·ε‖T‖).
       let top = 0;
       for (let k = lo; k <= hi; k++) top = Math.max(top, Math.abs(x[k]));
-      const rhs = (size * norm1 * Math.max(EPS, Math.abs(u0[hi]))) / top;
+      const rhs = (size * norm1 * Math.max(EPS, 1 / Math.abs(u0[hi]))) / top;
       for (let k = lo; k <= hi; k++) x[k] *= rhs;
-      substitute(lo, hi, u0, u1, u2, mult, pivot, x);
+      substitute(lo, hi, u0, u1, u2, mult, swap, x);
       for (let i = clusterStart; i < j; i++) {
         let dot = 0;
         for (let k = lo; k <= hi; k++) dot += x[k] * z[k * n + i];
@@ -107,10 +107,13 @@ function solveBlock(
   return true;
 }
 
-/** (T − σI)[lo..hi] = P L U with partial pivoting (U has two super-diagonals); tiny pivots are lifted to ±tiny. */
+/**
+ * (T − σI)[lo..hi] = P L U with partial pivoting (U has two super-diagonals); tiny pivots are lifted to ±tiny.
+ * u0 receives the reciprocals of the pivots, so that the repeated solves need no division.
+ */
 function factor(
   lo: number, hi: number, d: Float64Array, e: Float64Array, shift: number, tiny: number,
-  u0: Float64Array, u1: Float64Array, u2: Float64Array, mult: Float64Array, pivot: Uint8Array,
+  u0: Float64Array, u1: Float64Array, u2: Float64Array, mult: Float64Array, swap: Float64Array,
 ): void {
   let a = d[lo] - shift;
   let b = lo < hi ? e[lo] : 0;
@@ -124,7 +127,7 @@ function factor(
       u1[k] = b;
       u2[k] = 0;
       mult[k] = m;
-      pivot[k] = 0;
+      swap[k] = 0;
       a = nextA - m * b;
       b = nextB;
     } else {
@@ -133,31 +136,44 @@ function factor(
       u1[k] = nextA;
       u2[k] = nextB;
       mult[k] = m;
-      pivot[k] = 1;
+      swap[k] = 1;
       a = b - m * nextA;
       b = -m * nextB;
     }
     if (Math.abs(u0[k]) < tiny) u0[k] = u0[k] < 0 ? -tiny : tiny;
+    u0[k] = 1 / u0[k];
   }
-  u0[hi] = Math.abs(a) < tiny ? (a < 0 ? -tiny : tiny) : a;
+  u0[hi] = 1 / (Math.abs(a) < tiny ? (a < 0 ? -tiny : tiny) : a);
 }
 
-/** x ← (P L U)⁻¹ x on rows lo..hi. */
+/**
+ * x ← (P L U)⁻¹ x on rows lo..hi (u0 holds reciprocal pivots). The row interchange is applied as an exact
+ * 0/1 blend rather than a branch, because the pivoting pattern is data-dependent and mispredicts.
+ */
 function substitute(
   lo: number, hi: number, u0: Float64Array, u1: Float64Array, u2: Float64Array, mult: Float64Array,
-  pivot: Uint8Array, x: Float64Array,
+  swap: Float64Array, x: Float64Array,
 ): void {
+  let carry = x[lo];
   for (let k = lo; k < hi; k++) {
-    if (pivot[k] === 1) {
-      const t = x[k];
-      x[k] = x[k + 1];
-      x[k + 1] = t;
-    }
-    x[k + 1] -= mult[k] * x[k];
+    const p = swap[k];
+    const q = 1 - p;
+    const next = x[k + 1];
+    const top = q * carry + p * next;
+    x[k] = top;
+    carry = p * carry + q * next - mult[k] * top;
   }
-  x[hi] /= u0[hi];
-  if (hi > lo) x[hi - 1] = (x[hi - 1] - u1[hi - 1] * x[hi]) / u0[hi - 1];
-  for (let k = hi - 2; k >= lo; k--) x[k] = (x[k] - u1[k] * x[k + 1] - u2[k] * x[k + 2]) / u0[k];
+  let after = carry * u0[hi];
+  x[hi] = after;
+  if (hi === lo) return;
+  let current = (x[hi - 1] - u1[hi - 1] * after) * u0[hi - 1];
+  x[hi - 1] = current;
+  for (let k = hi - 2; k >= lo; k--) {
+    const value = (x[k] - u2[k] * after - u1[k] * current) * u0[k];
+    x[k] = value;
+    after = current;
+    current = value;
+  }
 }
 
 function sortRange(a: Float64Array, from: number, to: number): void {

@@ -30,7 +30,7 @@ export class HermitianScratch implements EigenWorkspace {
   /** Tridiagonal LU factors and iterate of inverse iteration. */
   readonly solver: {
     readonly u0: Float64Array; readonly u1: Float64Array; readonly u2: Float64Array;
-    readonly mult: Float64Array; readonly x: Float64Array; readonly pivot: Uint8Array;
+    readonly mult: Float64Array; readonly x: Float64Array; readonly swap: Float64Array;
   };
 
   constructor(n: number) {
@@ -52,7 +52,7 @@ export class HermitianScratch implements EigenWorkspace {
     this.order = new Int32Array(n);
     this.solver = {
       u0: new Float64Array(n), u1: new Float64Array(n), u2: new Float64Array(n),
-      mult: new Float64Array(n), x: new Float64Array(n), pivot: new Uint8Array(n),
+      mult: new Float64Array(n), x: new Float64Array(n), swap: new Float64Array(n),
     };
   }
 }
