@@ -1,3 +1,4 @@
+import { finishUpdateVector, updateAndMultiply, updateRows } from "./eigen-householder-kernel";
 import type { HermitianScratch } from "./eigen-workspace";
 
 /*
@@ -90,108 +91,6 @@ export function reduceHermitianToTridiagonal(n: number, re: Float64Array, im: Fl
   }
   off[n - 1] = 0;
   for (let i = 0; i < n; i++) diag[i] = re[i * n + i];
-}
-
-/** Rows from..to of the lower triangle −= v qᴴ + q vᴴ, with v stored at offset vRow. */
-function updateRows(
-  n: number, from: number, to: number, vRow: number, re: Float64Array, im: Float64Array, qRe: Float64Array, qIm: Float64Array,
-): void {
-  for (let j = from; j <= to; j++) {
-    const rj = j * n;
-    const vr = re[vRow + j];
-    const vi = im[vRow + j];
-    const qr = qRe[j];
-    const qi = qIm[j];
-    for (let k = 0; k <= j; k++) {
-      const wr = re[vRow + k];
-      const wi = im[vRow + k];
-      const ur = qRe[k];
-      const ui = qIm[k];
-      re[rj + k] -= vr * ur + vi * ui + qr * wr + qi * wi;
-      im[rj + k] -= vi * ur - vr * ui + qi * wr - qr * wi;
-    }
-  }
-}
-
-/**
- * One pass over rows 0..l of the lower triangle: apply the owed update (v at vRow, q) and accumulate the
- * Hermitian product p = B x with x the new reflector at xRow (B is read from its lower triangle only).
- */
-function updateAndMultiply(
-  n: number, l: number, vRow: number, xRow: number, re: Float64Array, im: Float64Array,
-  qRe: Float64Array, qIm: Float64Array, pRe: Float64Array, pIm: Float64Array,
-): void {
-  pRe.fill(0, 0, l + 1);
-  pIm.fill(0, 0, l + 1);
-  for (let j = 0; j <= l; j++) {
-    const rj = j * n;
-    const vr = re[vRow + j];
-    const vi = im[vRow + j];
-    const qr = qRe[j];
-    const qi = qIm[j];
-    const xr = re[xRow + j];
-    const xi = im[xRow + j];
-    let sr = 0;
-    let si = 0;
-    let k = 0;
-    for (; k + 1 < j; k += 2) {
-      const wr0 = re[vRow + k], wi0 = im[vRow + k], wr1 = re[vRow + k + 1], wi1 = im[vRow + k + 1];
-      const ur0 = qRe[k], ui0 = qIm[k], ur1 = qRe[k + 1], ui1 = qIm[k + 1];
-      const ar0 = re[rj + k] - (vr * ur0 + vi * ui0 + qr * wr0 + qi * wi0);
-      const ai0 = im[rj + k] - (vi * ur0 - vr * ui0 + qi * wr0 - qr * wi0);
-      const ar1 = re[rj + k + 1] - (vr * ur1 + vi * ui1 + qr * wr1 + qi * wi1);
-      const ai1 = im[rj + k + 1] - (vi * ur1 - vr * ui1 + qi * wr1 - qr * wi1);
-      re[rj + k] = ar0;
-      im[rj + k] = ai0;
-      re[rj + k + 1] = ar1;
-      im[rj + k + 1] = ai1;
-      const yr0 = re[xRow + k], yi0 = im[xRow + k], yr1 = re[xRow + k + 1], yi1 = im[xRow + k + 1];
-      sr += ar0 * yr0 - ai0 * yi0 + ar1 * yr1 - ai1 * yi1;
-      si += ar0 * yi0 + ai0 * yr0 + ar1 * yi1 + ai1 * yr1;
-      pRe[k] += ar0 * xr + ai0 * xi;
-      pIm[k] += ar0 * xi - ai0 * xr;
-      pRe[k + 1] += ar1 * xr + ai1 * xi;
-      pIm[k + 1] += ar1 * xi - ai1 * xr;
-    }
-    for (; k < j; k++) {
-      const wr = re[vRow + k];
-      const wi = im[vRow + k];
-      const ur = qRe[k];
-      const ui = qIm[k];
-      const ar = re[rj + k] - (vr * ur + vi * ui + qr * wr + qi * wi);
-      const ai = im[rj + k] - (vi * ur - vr * ui + qi * wr - qr * wi);
-      re[rj + k] = ar;
-      im[rj + k] = ai;
-      const yr = re[xRow + k];
-      const yi = im[xRow + k];
-      sr += ar * yr - ai * yi;
-      si += ar * yi + ai * yr;
-      pRe[k] += ar * xr + ai * xi;
-      pIm[k] += ar * xi - ai * xr;
-    }
-    const djj = re[rj + j] - 2 * (vr * qr + vi * qi);
-    re[rj + j] = djj;
-    pRe[j] += sr + djj * xr;
-    pIm[j] += si + djj * xi;
-  }
-}
-
-/** q = p/h − K v with K = Re(vᴴp)/(2h²), so that P B P = B − v qᴴ − q vᴴ. */
-function finishUpdateVector(
-  l: number, row: number, h: number, re: Float64Array, im: Float64Array, pRe: Float64Array, pIm: Float64Array,
-): void {
-  const invH = 1 / h;
-  let vp = 0;
-  for (let k = 0; k <= l; k++) {
-    pRe[k] *= invH;
-    pIm[k] *= invH;
-    vp += re[row + k] * pRe[k] + im[row + k] * pIm[k];
-  }
-  const half = 0.5 * vp * invH;
-  for (let k = 0; k <= l; k++) {
-    pRe[k] -= half * re[row + k];
-    pIm[k] -= half * im[row + k];
-  }
 }
 
 function safeHypot(a: number, b: number): number {
