@@ -147,12 +147,19 @@ export function moveHints(actor: RuleActor, facts: ProposalFacts): MoveHint[] {
   return out;
 }
 
-/** Who may assign reviewers: a curator of the family, while the proposal is submitted, under review or in revision. */
-export function decideAssignReviewer(actor: RuleActor, facts: ProposalFacts, reviewer: { id: string; roles: readonly Role[] }): MoveDecision {
+/** Who may change the reviewer list: a curator of the family, while the proposal is submitted, under review or in revision. */
+export function decideManageReviewers(actor: RuleActor, facts: ProposalFacts): MoveDecision {
   if (!isFamilyCurator(actor, facts)) return { allowed: false, code: "forbidden:move", reasons: ["Only a curator of this model family may assign reviewers."] };
   if (!["submitted", "under_review", "revision"].includes(facts.stage)) {
-    return { allowed: false, code: "invalid:transition", reasons: [`Reviewers cannot be assigned while the proposal is ${STAGE_META[facts.stage].label.toLowerCase()}.`] };
+    return { allowed: false, code: "invalid:transition", reasons: [`Reviewers cannot be changed while the proposal is ${STAGE_META[facts.stage].label.toLowerCase()}.`] };
   }
+  return { allowed: true };
+}
+
+/** Assigning additionally needs a reviewer who holds the role and is not the author. */
+export function decideAssignReviewer(actor: RuleActor, facts: ProposalFacts, reviewer: { id: string; roles: readonly Role[] }): MoveDecision {
+  const manage = decideManageReviewers(actor, facts);
+  if (!manage.allowed) return manage;
   if (reviewer.id === facts.authorId) return { allowed: false, code: "refused:gate", reasons: ["Nobody may review their own proposal."] };
   if (!reviewer.roles.includes("reviewer")) return { allowed: false, code: "refused:gate", reasons: ["That person does not hold the reviewer role."] };
   return { allowed: true };

@@ -20,12 +20,15 @@ const STATUS: Record<ErrorKind, number> = {
 export class AppError extends Error {
   readonly code: ErrorCode;
   readonly fieldErrors?: Record<string, string[]>;
+  /** Extra data a client may use, e.g. the current state after a conflict or every reason of a refusal. */
+  readonly details?: Record<string, unknown>;
 
-  constructor(code: ErrorCode, message: string, fieldErrors?: Record<string, string[]>) {
+  constructor(code: ErrorCode, message: string, fieldErrors?: Record<string, string[]>, details?: Record<string, unknown>) {
     super(message);
     this.name = "AppError";
     this.code = code;
     this.fieldErrors = fieldErrors;
+    this.details = details;
   }
 
   get kind(): ErrorKind {
@@ -38,14 +41,14 @@ export function httpStatusOf(code: ErrorCode): number {
 }
 
 export interface ErrorBody {
-  error: { code: ErrorCode | "internal:error"; message: string; fieldErrors?: Record<string, string[]> };
+  error: { code: ErrorCode | "internal:error"; message: string; fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> };
 }
 
 /** The JSON body and status a route handler returns for any thrown value. */
 export function toErrorResponse(err: unknown): { body: ErrorBody; status: number } {
   if (err instanceof AppError) {
     return {
-      body: { error: { code: err.code, message: err.message, fieldErrors: err.fieldErrors } },
+      body: { error: { code: err.code, message: err.message, fieldErrors: err.fieldErrors, details: err.details } },
       status: httpStatusOf(err.code),
     };
   }

@@ -1,5 +1,5 @@
 import "server-only";
-import type { z } from "zod";
+import { z } from "zod";
 import { fieldErrorsOf } from "./action";
 import { AppError, toErrorResponse } from "./errors";
 
@@ -26,4 +26,11 @@ export function handleRoute<A extends unknown[]>(fn: (...args: A) => Promise<Res
       return Response.json(body, { status });
     }
   };
+}
+
+/** Route params such as ids, validated like bodies; a malformed id is simply not found. */
+export function parseIdParam(value: string, what: string): string {
+  const parsed = z.uuid().safeParse(value);
+  if (!parsed.success) throw new AppError(`not-found:${what}`, `That ${what} does not exist.`);
+  return parsed.data;
 }

@@ -28,7 +28,7 @@ export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"
 export APP_URL="${APP_URL:-$NEXTAUTH_URL}"
 
 npx tsx db/migrate.ts
-npx tsx db/seed.ts
+node_modules/.bin/tsx --conditions=react-server db/seed.ts
 
 if [ -z "${SMTP_HOST:-}" ]; then
   export SMTP_HOST=127.0.0.1 SMTP_PORT="${FAKE_SMTP_PORT:-2525}"

@@ -22,6 +22,7 @@ export const DEMO_FAMILIES = [
     description: "A one-dimensional chain with one s and one pz orbital per atom; the smallest model with s–p mixing. Invented values.",
     dimension: 1,
     documentFile: "demo-sp-chain",
+    acceptanceCriteria: [{ metric: "gap", target: 1.5, tolerance: 0.3 }],
   },
   {
     slug: "honeycomb-pz",
@@ -29,6 +30,7 @@ export const DEMO_FAMILIES = [
     description: "A two-dimensional honeycomb sheet with one pz orbital per site and nearest-neighbour hopping. Invented values.",
     dimension: 2,
     documentFile: "demo-honeycomb-pz",
+    acceptanceCriteria: [{ metric: "bandwidth", band: 0, target: 8.4, tolerance: 0.5 }],
   },
   {
     slug: "diamond-sp3s",
@@ -36,5 +38,9 @@ export const DEMO_FAMILIES = [
     description: "A three-dimensional diamond-lattice model with s, p and an excited s* orbital on each of the two sites, nearest neighbours only. Invented values.",
     dimension: 3,
     documentFile: "demo-diamond-sp3s",
+    acceptanceCriteria: [
+      { metric: "gap", target: 1.06, tolerance: 0.15 },
+      { metric: "gap-character", direct: false },
+    ],
   },
 ];

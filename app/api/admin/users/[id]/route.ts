@@ -2,8 +2,7 @@ import { z } from "zod";
 import { changeRolesInput, setActiveInput } from "@/lib/accounts/schemas";
 import { changeRoles, setActive } from "@/lib/accounts/service";
 import { requireRole } from "@/lib/auth/guard";
-import { AppError } from "@/lib/errors";
-import { handleRoute, parseJsonBody } from "@/lib/http";
+import { handleRoute, parseIdParam, parseJsonBody } from "@/lib/http";
 
 export const dynamic = "force-dynamic";
 
@@ -14,8 +13,7 @@ const patchBody = z.union([
 
 /** PATCH /api/admin/users/:id — body {roles, version} or {active, version} (admin only, optimistic concurrency). */
 export const PATCH = handleRoute(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
-  const { id } = z.object({ id: z.uuid() }).catch({ id: "" }).parse(await params);
-  if (!id) throw new AppError("not-found:user", "That person does not exist.");
+  const id = parseIdParam((await params).id, "user");
   const body = await parseJsonBody(request, patchBody);
   const actor = await requireRole("admin");
   if ("roles" in body) await changeRoles(actor, changeRolesInput.parse({ ...body, userId: id }));

@@ -1,0 +1,16 @@
+import { z } from "zod";
+import { createProposalInput } from "@/board/schemas";
+import { createProposal } from "@/board/service";
+import { requireRole } from "@/lib/auth/guard";
+import { handleRoute, parseJsonBody } from "@/lib/http";
+
+export const dynamic = "force-dynamic";
+
+const body = createProposalInput.extend({ document: z.record(z.string(), z.unknown()).optional() });
+
+/** POST /api/proposals {familySlug, baseReleaseId|null, title, rationale?, document?} — start a proposal (authors). */
+export const POST = handleRoute(async (request: Request) => {
+  const { document, ...input } = await parseJsonBody(request, body);
+  const user = await requireRole("author");
+  return Response.json(await createProposal(user, input, document), { status: 201 });
+});
