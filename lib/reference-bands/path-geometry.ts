@@ -46,10 +46,14 @@ function lerp(leg: PathLeg, t: number): number[] {
   return leg.from.map((x, i) => x + t * (leg.to[i] - x));
 }
 
-/** The fractional point at distance d: the first leg that reaches d (so a run's end, not the next run's start). */
+/** The fractional point at distance d; where the path jumps, the end of the run before the jump. */
 export function pointAtDistance(geo: PathGeometry, d: number): number[] | null {
   if (d > geo.total + geo.tolerance || geo.legs.length === 0) return null;
-  const leg = geo.legs.find((l) => d <= l.start + l.length) ?? geo.legs[geo.legs.length - 1];
+  let i = geo.legs.findIndex((l) => d <= l.start + l.length);
+  if (i < 0) i = geo.legs.length - 1;
+  const startsRun = i > 0 && geo.legs[i].run !== geo.legs[i - 1].run;
+  if (startsRun && d - geo.legs[i].start <= geo.tolerance) return geo.legs[i - 1].to.slice();
+  const leg = geo.legs[i];
   const t = leg.length > 0 ? Math.min(1, Math.max(0, (d - leg.start) / leg.length)) : 0;
   return lerp(leg, t);
 }

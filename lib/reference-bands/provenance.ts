@@ -3,10 +3,11 @@ import { z } from "zod";
 const MAX = 500;
 
 function text(label: string, example: string) {
+  const required = `${label} is required, e.g. "${example}"`;
   return z
-    .string({ error: `${label} must be text` })
+    .string({ error: (issue) => (issue.input === undefined ? required : `${label} must be text`) })
     .trim()
-    .min(1, { error: `${label} is required, e.g. "${example}"` })
+    .min(1, { error: required })
     .max(MAX, { error: `${label} must be at most ${MAX} characters` });
 }
 
