@@ -14,7 +14,7 @@ import type { HermitianScratch } from "./eigen-workspace";
 
 const EPS = Number.EPSILON;
 const MAX_SOLVES = 5;
-const EXTRA_SOLVES = 2;
+const EXTRA_SOLVES = 1;
 const CLUSTER = 1e-3;
 
 /**
