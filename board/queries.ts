@@ -4,31 +4,13 @@ import { db, type Database, type Tx } from "@/db/client";
 import { familyCurators, modelFamilies, proposals, referenceBandSets, releases, reviewerAssignments, revisions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
 import type { BoardFilters } from "./schemas";
+import type { BoardCard } from "./card";
 import type { Stage } from "./stages";
+
+export type { BoardCard };
 
 type Conn = Database | Tx;
 
-export interface BoardCard {
-  id: string;
-  title: string;
-  stage: Stage;
-  version: number;
-  updatedAt: string;
-  authorId: string;
-  authorName: string;
-  familySlug: string;
-  familyTitle: string;
-  requiredAccepts: number;
-  baseVersion: string | null;
-  revision: number;
-  checksPassing: boolean;
-  checksWaived: boolean;
-  shiftProfile: number[] | null;
-  maxShift: number | null;
-  reviewers: { id: string; name: string }[];
-  tally: { accept: number; minor_revision: number; major_revision: number; decline: number; stale: number };
-  openBlockingRemarks: number;
-}
 
 /**
  * One query for any number of cards: latest revision, fresh verdict tally (each assigned non-author reviewer's latest

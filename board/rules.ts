@@ -69,9 +69,11 @@ const acceptGate = (f: ProposalFacts) => [
 ];
 
 const resubmitGate = (f: ProposalFacts) =>
-  f.revisionWhenReturned !== null && f.latestRevision <= f.revisionWhenReturned
-    ? [`Save a new revision first: it is still revision ${f.latestRevision}, as when it was sent back.`]
-    : [];
+  f.revisionWhenReturned === null
+    ? ["It is not known which revision was sent back, so a new revision cannot be recognised; ask a curator."]
+    : f.latestRevision <= f.revisionWhenReturned
+      ? [`Save a new revision first: it is still revision ${f.latestRevision}, as when it was sent back.`]
+      : [];
 
 const TRANSITIONS: Partial<Record<Stage, Partial<Record<Stage, Transition>>>> = {
   draft: {
@@ -150,6 +152,7 @@ export function moveHints(actor: RuleActor, facts: ProposalFacts): MoveHint[] {
 /** Who may change the reviewer list: a curator of the family, while the proposal is submitted, under review or in revision. */
 export function decideManageReviewers(actor: RuleActor, facts: ProposalFacts): MoveDecision {
   if (!isFamilyCurator(actor, facts)) return { allowed: false, code: "forbidden:move", reasons: ["Only a curator of this model family may assign reviewers."] };
+  if (actor.id === facts.authorId) return { allowed: false, code: "forbidden:move", reasons: ["A curator cannot choose the reviewers of their own proposal."] };
   if (!["submitted", "under_review", "revision"].includes(facts.stage)) {
     return { allowed: false, code: "invalid:transition", reasons: [`Reviewers cannot be changed while the proposal is ${STAGE_META[facts.stage].label.toLowerCase()}.`] };
   }

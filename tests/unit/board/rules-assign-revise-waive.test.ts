@@ -30,7 +30,8 @@ describe("decideAssignReviewer for every role combination × position × stage �
       for (const stage of SPEC_STAGES) {
         const facts = placeActor(openFacts(stage), position);
         for (const { name, reviewer } of CANDIDATES) {
-          const expected: Outcome = !specFamilyCurator(actor, facts)
+          // A curator who wrote the proposal may not choose its reviewers (like every other curator action on it).
+          const expected: Outcome = !specFamilyCurator(actor, facts) || actor.id === facts.authorId
             ? "forbidden:move"
             : !REVIEW_STAGES.includes(stage)
               ? "invalid:transition"
