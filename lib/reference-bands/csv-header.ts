@@ -67,7 +67,8 @@ export function parseHeader(cells: string[], line: number): CsvHeader {
   const { kColumns } = k;
   const bandCount = cells.length - kColumns;
   if (bandCount > REFERENCE_LIMITS.maxBands) {
-    issues.add({ line, message: `line ${line}: too many columns: ${bandCount} band columns, the limit is ${REFERENCE_LIMITS.maxBands}` });
+    const column = kColumns + REFERENCE_LIMITS.maxBands + 1;
+    issues.add({ line, column, message: `${cellPlace(line, column, cells[column - 1])}: too many columns: ${bandCount} band columns, the limit is ${REFERENCE_LIMITS.maxBands}` });
   }
   if (bandCount < 1) issues.add({ line, message: `line ${line}: no band columns after the k column(s); add e.g. 'E1 (eV)'` });
   issues.throwIfAny();

@@ -28,7 +28,10 @@ export function parseReferenceCsv(text: string): ParsedReferenceBands {
       continue;
     }
     if (cells.length !== headerCells.length) {
-      issues.add({ line, message: `line ${line}: wrong number of cells: expected ${headerCells.length} as in the header (line ${headerLine}), found ${cells.length}` });
+      // point at the first cell too many, or the first one missing
+      const column = Math.min(cells.length, headerCells.length) + 1;
+      const at = cellPlace(line, column, headerCells[column - 1]);
+      issues.add({ line, column, message: `${at}: wrong number of cells: expected ${headerCells.length} as in the header (line ${headerLine}), found ${cells.length}` });
       continue;
     }
     const place = (c: number) => cellPlace(line, c + 1, headerCells[c]);

@@ -31,7 +31,7 @@ describe("CSV errors name line and column", () => {
   ])("the energy cell %s", (cell, message) => {
     const text = lines("k_index,E1 (eV)", "0,1", `1,${cell}`);
     if (message === null) {
-      expect(issuesOf(text)).toEqual([{ line: 3, message: "line 3: wrong number of cells: expected 2 as in the header (line 1), found 3" }]);
+      expect(issuesOf(text)).toEqual([{ line: 3, column: 3, message: "line 3, column 3: wrong number of cells: expected 2 as in the header (line 1), found 3" }]);
     } else {
       expect(issuesOf(text)).toEqual([{ line: 3, column: 2, message: `line 3, column 2 (E1 (eV)): ${message}` }]);
     }
@@ -40,7 +40,7 @@ describe("CSV errors name line and column", () => {
   it("a row with too few cells, and an empty k cell", () => {
     const text = lines("k_path (1/angstrom),E1 (eV),E2 (eV)", "0,1,2", "0.1,1", ",1,2");
     expect(issuesOf(text)).toEqual([
-      { line: 3, message: "line 3: wrong number of cells: expected 3 as in the header (line 1), found 2" },
+      { line: 3, column: 3, message: "line 3, column 3 (E2 (eV)): wrong number of cells: expected 3 as in the header (line 1), found 2" },
       { line: 4, column: 1, message: "line 4, column 1 (k_path (1/angstrom)): k value missing: k cells must not be empty" },
     ]);
   });
@@ -115,7 +115,7 @@ describe("CSV errors name line and column", () => {
     expect(issuesOf(lines("k_index,E1 (eV)", ...rows))).toEqual([{ line: 20_002, message: "line 20002: too many rows: the limit is 20000 data rows" }]);
     expect(parseReferenceBands("ok.csv", lines("k_index,E1 (eV)", ...rows.slice(0, 20_000))).pointCount).toBe(20_000);
     const wide = (n: number) => ["k_index", ...Array.from({ length: n }, (_, b) => `E${b + 1} (eV)`)].join(",");
-    expect(issuesOf(lines(wide(501), "0"))).toEqual([{ line: 1, message: "line 1: too many columns: 501 band columns, the limit is 500" }]);
+    expect(issuesOf(lines(wide(501), "0"))).toEqual([{ line: 1, column: 502, message: "line 1, column 502 (E501 (eV)): too many columns: 501 band columns, the limit is 500" }]);
     expect(parseReferenceBands("ok.csv", lines(wide(500), ["0", ...new Array(500).fill("1")].join(","))).bandCount).toBe(500);
     const big = lines("k_index,E1 (eV)", "0,1") + "#".repeat(5 * 1024 * 1024);
     // ASCII only, so bytes = characters
