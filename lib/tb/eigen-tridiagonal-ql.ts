@@ -9,6 +9,8 @@
 
 const EPS = Number.EPSILON;
 export const SWEEPS_PER_EIGENVALUE = 30;
+/** Below this, p·t might lose accuracy to underflow; the step then divides twice. */
+const SAFE_PRODUCT = 2 ** -900;
 
 export function tridiagonalEigenvalues(n: number, diag: Float64Array, off: Float64Array): void {
   const scale = normalise(n, diag, off);
@@ -48,13 +50,24 @@ export function eigenvaluesOfNormalised(diag: Float64Array, off: Float64Array, f
       const t = p + bb;
       if (i !== m - 1) off[i + 1] = s * t;
       const oldC = c;
-      c = p / t;
-      s = bb / t;
+      // c = p/t, s = bb/t and 1/c = t/p from one division: the step is latency-bound, and divisions dominate.
+      const pt = p * t;
+      let invC: number;
+      if (pt > SAFE_PRODUCT) {
+        const r = 1 / pt;
+        c = p * p * r;
+        s = bb * p * r;
+        invC = t * t * r;
+      } else {
+        c = p / t;
+        s = bb / t;
+        invC = 1 / c;
+      }
       const oldGamma = gamma;
       const alpha = diag[i];
       gamma = c * (alpha - sigma) - s * oldGamma;
       diag[i + 1] = oldGamma + (alpha - gamma);
-      p = c !== 0 ? (gamma * gamma) / c : oldC * bb;
+      p = c !== 0 ? gamma * gamma * invC : oldC * bb;
     }
     off[l] = s * p;
     diag[l] = sigma + gamma;
