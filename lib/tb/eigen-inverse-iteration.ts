@@ -3,10 +3,12 @@ import type { HermitianScratch } from "./eigen-workspace";
 
 /*
  * Eigenvectors of a real symmetric tridiagonal matrix by inverse iteration on its eigenvalues, block by
- * unreduced block, following LAPACK dstein (its constants and stopping rule from memory; Dhillon, "Current inverse iteration software can fail",
- * BIT 38 (1998) 685, reviews the method and its limits; Golub & Van Loan, "Matrix Computations", 4th ed.
- * (2013), §8.2.2 and §8.4): each eigenvalue from the root-free QL is used as shift in a tridiagonal LU with
- * partial pivoting, a few solves from a fixed pseudo-random start give the vector, and vectors whose
+ * unreduced block, following LAPACK dstein (its constants and stopping rule from memory); Dhillon, "Current
+ * inverse iteration software can fail", BIT 38 (1998) 685, reviews the method and its limits; Golub &
+ * Van Loan, "Matrix Computations", 4th ed. (2013), §8.2.2. Each eigenvalue from the root-free QL is used as
+ * shift in a tridiagonal LU with partial pivoting; solves from a fixed pseudo-random start run until the
+ * iterate has grown enough to certify a residual of O(size·ε‖T‖), plus one more (dstein does two more;
+ * one already leaves the contamination by other eigenvectors far below rounding level). Vectors whose
  * eigenvalues lie within 10⁻³‖T‖ of each other (dstein's threshold) are re-orthogonalised by modified
  * Gram–Schmidt. O(n²) work instead of the O(n³) of QL with accumulated rotations.
  * Returns false, leaving diag/off untouched, if a vector does not converge; the caller then uses QL.

@@ -15,7 +15,7 @@ export class HermitianScratch implements EigenWorkspace {
   readonly phaseRe: Float64Array;
   readonly phaseIm: Float64Array;
   /** Two pairs of length-n vectors that alternate between the owed rank-2 update vector q and the next
-   *  matrix–vector product p of the reduction; the first pair later holds the QL shifts. */
+   *  matrix–vector product p of the reduction; afterwards scratch for the tridiagonal eigenvector solvers. */
   readonly tmpRe: Float64Array;
   readonly tmpIm: Float64Array;
   readonly tmp2Re: Float64Array;

@@ -90,6 +90,7 @@ function checkInput(n: number, re: Float64Array, im: Float64Array, values: Float
   checkLength("re", re, n * n);
   checkLength("im", im, n * n);
   checkLength("values", values, n);
+  // x·0 is 0 for finite x and NaN for ±∞ or NaN, so one comparison per row checks the lower triangle.
   for (let i = 0; i < n; i++) {
     const row = i * n;
     let sum = 0;
