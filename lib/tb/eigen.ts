@@ -16,7 +16,7 @@ import { assertSize, scratchFor, type EigenWorkspace, type HermitianScratch } fr
 
 /** Order from which inverse iteration (O(n²)) beats QL with accumulated rotations (O(n³)) on this engine;
  *  measured on random Hermitian matrices. QL also takes over if inverse iteration fails to converge. */
-const INVERSE_ITERATION_FROM = 28;
+const INVERSE_ITERATION_FROM = 16;
 
 export { createEigenWorkspace, type EigenWorkspace } from "./eigen-workspace";
 
