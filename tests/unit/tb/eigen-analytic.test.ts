@@ -142,13 +142,19 @@ describe("analytic spectra", () => {
 
   // With a repeated eigenvalue only the eigenspace is defined: the projector Σ v vᴴ over the computed vectors
   // must equal U_S U_Sᴴ over the columns of the known U with that eigenvalue (unitary similarity).
-  it("degenerate spectrum: eigenvalues, and eigenspace projectors", () => {
-    const lambda = [1, 1, 1, -2, -2, 5, 0, 0, 0, 0];
+  // Two sizes, so that both tridiagonal eigenvector solvers (QL below n = 16, inverse iteration above) are used.
+  it.each([
+    [[1, 1, 1, -2, -2, 5, 0, 0, 0, 0]],
+    [[1, 1, 1, 1, 1, -2, -2, -2, -2, 0, 0, 0, 0, 0, 0, 3, 4.5, 4.5, 4.5, -7, 1, 0, -2, 2]],
+  ])("degenerate spectrum %j: eigenvalues, and eigenspace projectors", (lambda) => {
     const n = lambda.length;
     const { re, im } = similarTo(lambda);
     const s = solve(n, re, im);
     const sorted = lambda.slice().sort((a, b) => a - b);
     for (let k = 0; k < n; k++) expect(Math.abs(s.values[k] - sorted[k])).toBeLessThan(1e-13);
+    const q = quality(n, re, im, s);
+    expect(q.residual).toBeLessThan(1e-13);
+    expect(q.orthogonality).toBeLessThan(1e-13);
     const u = knownUnitary(n);
     for (const level of [1, -2, 0]) {
       const known = lambda.flatMap((x, k) => (x === level ? [k] : []));
