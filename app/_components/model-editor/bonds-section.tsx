@@ -36,7 +36,15 @@ export function BondsSection() {
           const name = `${shell.species.join("–")} shell ${shell.index ?? "?"}`;
           return (
             <li key={i} className="rounded-md border border-rule bg-card px-2 py-1.5">
-              <div className="grid grid-cols-[4.5rem_4.5rem_3.5rem_minmax(0,1fr)_minmax(0,1fr)_auto] items-start gap-1.5 text-xs">
+              <div aria-hidden className="mb-0.5 grid grid-cols-[4.5rem_4.5rem_3.5rem_minmax(0,1fr)_minmax(0,1fr)_4rem] gap-1.5 text-[11px] text-ink-soft">
+                <span>from</span>
+                <span>to</span>
+                <span>index</span>
+                <span>distance Å</span>
+                <span>tolerance Å</span>
+                <span />
+              </div>
+              <div className="grid grid-cols-[4.5rem_4.5rem_3.5rem_minmax(0,1fr)_minmax(0,1fr)_4rem] items-start gap-1.5 text-xs">
                 {([0, 1] as const).map((end) => (
                   <SelectInput
                     key={end}
@@ -52,14 +60,6 @@ export function BondsSection() {
                 <button type="button" className={smallButtonClass} aria-label={`remove ${name}`} onClick={() => api.apply((d, base) => removeShell(d, base, i))}>
                   remove
                 </button>
-              </div>
-              <div aria-hidden className="mt-0.5 grid grid-cols-[4.5rem_4.5rem_3.5rem_minmax(0,1fr)_minmax(0,1fr)_auto] gap-1.5 text-[11px] text-ink-soft">
-                <span>from</span>
-                <span>to</span>
-                <span>index</span>
-                <span>distance Å</span>
-                <span>tolerance Å</span>
-                <span className="w-12" />
               </div>
               <div className="mt-1.5 grid grid-cols-[repeat(auto-fill,minmax(5.25rem,1fr))] gap-x-1.5 gap-y-1">
                 {shellParamKeys(api.draft, i).map((key) => (

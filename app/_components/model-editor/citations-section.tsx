@@ -32,7 +32,7 @@ export function CitationsSection({ needs }: { needs: CitationNeed[] }) {
                   {inherited ? " · text is the base's" : ""}
                 </span>
               </span>
-              <TextInput path={path} label={`citation or reason for ${key}`} optional />
+              <TextInput path={path} label={`citation or reason for ${key}`} optional hideChange />
             </li>
           );
         })}

@@ -2,6 +2,7 @@ import { ORBITALS, type Orbital } from "@/lib/tb/orbitals";
 import { getAt, isRecord, setAt, type Draft } from "./draft-path";
 import { asArray, asRecord, readShells, readSites, siteSpecies } from "./draft-read";
 import { moveShellCitations, syncDerived } from "./draft-sync";
+import { neighbourShellDistance } from "./shell-distance";
 
 /** Structural edits of a draft; each keeps on-site energies, shell parameters, spin–orbit and citations in step. */
 
@@ -78,8 +79,7 @@ export function addShell(draft: Draft, base: unknown): Draft {
   const shells = readShells(draft);
   const index = 1 + Math.max(0, ...shells.filter((s) => s.species[0] === species && s.species[1] === species).map((s) => s.index ?? 0));
   const baseShell = asArray(asRecord(base).shells).map(asRecord).find((s) => s.index === index && getAt(s, ["species", 0]) === species && getAt(s, ["species", 1]) === species);
-  const last = asRecord(asArray(draft.shells).at(-1));
-  const distance = typeof baseShell?.distance === "number" ? baseShell.distance : typeof last.distance === "number" ? last.distance : 1;
+  const distance = typeof baseShell?.distance === "number" ? baseShell.distance : (neighbourShellDistance(draft, [species, species], index) ?? 1);
   const shell = { species: [species, species], index, distance, tolerance: 0.001, params: {} };
   return syncDerived(setAt(draft, ["shells"], [...asArray(draft.shells), shell]), base);
 }

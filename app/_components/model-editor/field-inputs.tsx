@@ -91,7 +91,24 @@ export function NumberInput({ path, label, optional, onValue, className }: { pat
   );
 }
 
-export function TextInput({ path, label, optional, multiline, visibleLabel, className }: { path: readonly PathPart[]; label: string; optional?: boolean; multiline?: boolean; visibleLabel?: boolean; className?: string }) {
+export function TextInput({
+  path,
+  label,
+  optional,
+  multiline,
+  visibleLabel,
+  hideChange,
+  className,
+}: {
+  path: readonly PathPart[];
+  label: string;
+  optional?: boolean;
+  multiline?: boolean;
+  visibleLabel?: boolean;
+  /** For text whose change is already stated beside it (citations). */
+  hideChange?: boolean;
+  className?: string;
+}) {
   const { api, key, props } = useFieldProps(path);
   const value = getAt(api.draft, path);
   const text = typeof value === "string" ? value : value === undefined ? "" : JSON.stringify(value);
@@ -105,7 +122,7 @@ export function TextInput({ path, label, optional, multiline, visibleLabel, clas
         </label>
       ) : null}
       {multiline ? <textarea {...shared} rows={2} onChange={(e) => write(e.target.value)} /> : <input {...shared} type="text" onChange={(e) => write(e.target.value)} />}
-      <ChangeTag path={path} />
+      {hideChange ? null : <ChangeTag path={path} />}
       <FieldMessages path={key} />
     </div>
   );

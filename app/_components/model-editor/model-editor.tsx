@@ -46,7 +46,7 @@ export function ModelEditor({ initialDocument, baseDocument, inputName, onChange
 
   return (
     <EditorContext.Provider value={api}>
-      <div className="grid items-start gap-5 lg:grid-cols-[minmax(0,1fr)_minmax(0,27rem)]">
+      <div className="grid items-start gap-5 lg:grid-cols-[minmax(0,1fr)_minmax(0,31rem)]">
         <div className="min-w-0 space-y-3">
           <input type="hidden" name={inputName} value={JSON.stringify(draft)} />
           <section id={api.idFor("section:document")} tabIndex={-1} aria-label="Document" className="space-y-2 focus:outline-none">

@@ -32,6 +32,7 @@ export function PreviewPanel({ preview, problems, name, hasBase }: { preview: Ba
   if (result?.baseEnergies) series.push({ role: "base", label: "base release", energies: result.baseEnergies });
   if (result) series.push({ role: "proposal", label: stale ? "proposal (last valid)" : "proposal", energies: result.energies });
   const gapDelta = result?.gap.value != null && result.baseGap?.value != null ? result.gap.value - result.baseGap.value : null;
+  const gapMoved = gapDelta !== null && Math.abs(gapDelta) >= 5e-4;
   return (
     <section aria-label="Band preview" className="space-y-2">
       <p aria-live="polite" className={`text-xs ${stale ? "font-semibold text-copper-deep" : "text-ink-soft"}`}>
@@ -54,7 +55,7 @@ export function PreviewPanel({ preview, problems, name, hasBase }: { preview: Ba
               <dt className="text-ink-soft">base gap</dt>
               <dd className="num">
                 {result.baseGap?.text ?? result.baseNote ?? "—"}
-                {gapDelta !== null ? <span className="ml-2 text-copper-deep">Δ {formatDelta(gapDelta)} eV</span> : null}
+                {gapMoved && gapDelta !== null ? <span className="ml-2 text-copper-deep">Δ {formatDelta(gapDelta)} eV</span> : null}
               </dd>
             </>
           ) : null}

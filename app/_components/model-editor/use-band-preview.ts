@@ -73,11 +73,11 @@ export function useBandPreview(doc: ModelDocument | null, base: ModelDocument | 
     if (!doc) return;
     const key = bandsKey(doc);
     if (key === sent.current.key) return;
+    setState((s) => (s.computing ? s : { ...s, computing: true }));
     const timer = setTimeout(() => {
       if (!worker.current) return;
       const seq = sent.current.seq + 1;
       sent.current = { seq, key };
-      setState((s) => ({ ...s, computing: true }));
       worker.current.postMessage({ kind: "proposal", seq, doc } satisfies PreviewRequest);
     }, DEBOUNCE_MS);
     return () => clearTimeout(timer);

@@ -78,3 +78,17 @@ describe("sites, species, shells and spin–orbit", () => {
     expect(getAt(off, ["conventions", "spinLayout"])).toBe("none");
   });
 });
+
+describe("a new shell starts on a real neighbour distance", () => {
+  it("the chain's second shell sits at twice the spacing", () => {
+    const next = addShell(fresh(chain), null);
+    expect(getAt(next, ["shells", 1, "distance"])).toBeCloseTo(5.0, 4);
+  });
+  it("diamond's second shell sits at a/√2 (the fcc nearest-neighbour distance of one sublattice)", () => {
+    // Diamond: nearest neighbours at a√3/4, next nearest at a/√2 (Kittel, Introduction to Solid State Physics, 8th ed.,
+    // 2005, ch. 1, diamond structure; standard geometry). a = 5.5 Å in the seed document.
+    const next = addShell(fresh(diamond), null);
+    expect(getAt(next, ["shells", 1, "distance"])).toBeCloseTo(5.5 / Math.SQRT2, 3);
+    expect(errorsOf(next)).toEqual([]);
+  });
+});
