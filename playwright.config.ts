@@ -12,6 +12,7 @@ export default defineConfig({
   globalSetup: "./tests/e2e/global-setup.ts",
   use: {
     baseURL,
+    viewport: { width: 1600, height: 1000 },
     screenshot: "only-on-failure",
     trace: "retain-on-failure",
     launchOptions: {

@@ -1,5 +1,6 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
+import { blankModelDocument } from "@/lib/tb/blank-document";
 import { db, type Tx } from "@/db/client";
 import { proposals, reviewerAssignments, revisions, verdicts } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
@@ -61,7 +62,7 @@ export async function createProposal(actor: SessionUser, input: CreateProposalIn
     if (input.baseReleaseId && (!base || base.familyId !== family.id)) {
       throw new AppError("invalid:base", "The base release does not belong to this family.", { baseReleaseId: ["Not a release of this family."] });
     }
-    const raw = document ?? base?.document ?? family.startingDocument;
+    const raw = document ?? base?.document ?? blankModelDocument(family.dimension as 1 | 2 | 3);
     const parsed = parseDocument(raw);
     if (!parsed.ok) throw invalidDocument(parsed.issues);
     const baseDoc = await baseDocumentOf(tx, base?.id ?? null);

@@ -1,4 +1,5 @@
 import "server-only";
+import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
 import { AppError, type ErrorCode } from "./errors";
 import { requireRole, requireUser } from "./auth/guard";
@@ -38,7 +39,8 @@ export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {
 export function defineAction<S extends z.ZodType, T>(options: {
   access: Access;
   schema: S;
-  run: (input: z.output<S>, user: SessionUser | null) => Promise<T>;
+  /** The raw form is passed too, for uploads (File entries are not part of the parsed input). */
+  run: (input: z.output<S>, user: SessionUser | null, form: FormData) => Promise<T>;
   message?: string;
 }) {
   return async (_prev: ActionResult<T> | null, form: FormData): Promise<ActionResult<T>> => {
@@ -49,9 +51,10 @@ export function defineAction<S extends z.ZodType, T>(options: {
       if (!parsed.success) {
         return { ok: false, code: "invalid:input", error: "Some fields need attention.", fieldErrors: fieldErrorsOf(parsed.error) };
       }
-      const data = await options.run(parsed.data, user);
+      const data = await options.run(parsed.data, user, form);
       return { ok: true, data, message: options.message };
     } catch (err) {
+      unstable_rethrow(err); // redirect() and notFound() are control flow, not failures
       if (err instanceof AppError) return { ok: false, code: err.code, error: err.message, fieldErrors: err.fieldErrors };
       console.error("[bandgate] action failed", err);
       return { ok: false, code: "internal:error", error: "Something went wrong on our side." };

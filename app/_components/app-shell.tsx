@@ -10,7 +10,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-rule bg-card/80">
-        <div className="mx-auto flex max-w-6xl items-center gap-6 px-5 py-3">
+        <div className="mx-auto flex max-w-[100rem] items-center gap-6 px-5 py-3">
           <Link href="/" className="flex items-center gap-2.5" aria-label="Bandgate overview">
             <BrandMark size={30} />
             <span className="text-lg font-semibold tracking-tight">Bandgate</span>
@@ -33,7 +33,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-6xl flex-1 px-5 py-8">{children}</main>
+      <main className="mx-auto w-full max-w-[100rem] flex-1 px-5 py-8">{children}</main>
       <footer className="border-t border-rule py-4 text-center text-xs text-ink-soft">
         Bandgate · review and release of tight-binding models
       </footer>

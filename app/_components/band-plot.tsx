@@ -7,6 +7,8 @@ export interface BandSeries {
   label: string;
   /** Per k-point, the band energies (eV); null where a reference has no value. */
   energies: (number | null)[][];
+  /** Path distance of each point when it differs from the plot's (reference sets on their own k-points). */
+  distance?: number[];
 }
 
 const STYLE: Record<BandSeriesRole, { stroke: string; dash?: string; width: number }> = {
@@ -82,7 +84,7 @@ export function BandPlot({
             if (s.role === "reference") {
               return (
                 <g key={`${s.label}-${band}`} fill={STYLE.reference.stroke}>
-                  {values.map((v, i) => (v === null ? null : <circle key={i} cx={x(distance[i])} cy={y(v)} r={1.8} />))}
+                  {values.map((v, i) => (v === null ? null : <circle key={i} cx={x((s.distance ?? distance)[i])} cy={y(v)} r={1.8} />))}
                 </g>
               );
             }

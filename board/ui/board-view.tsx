@@ -1,7 +1,7 @@
 "use client";
 
 import { DndContext, KeyboardSensor, PointerSensor, useSensor, useSensors, type Announcements, type DragEndEvent, type DragStartEvent } from "@dnd-kit/core";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import useSWR from "swr";
 import { fetchJson } from "@/lib/client-fetch";
 import type { BoardCard } from "../card";
@@ -11,7 +11,7 @@ import { ARCHIVE_STAGES, LANE_STAGES, STAGE_META, type Stage } from "../stages";
 import { BoardFilterBar, filtersToQuery } from "./board-filters";
 import { hintsForCard } from "./card-hints";
 import { Lane, type LaneState } from "./lane";
-import { laneCoordinates } from "./lane-keyboard";
+import { laneCollision, laneCoordinates } from "./lane-keyboard";
 import { ProposalCard } from "./proposal-card";
 import { ReasonDialog } from "./reason-dialog";
 import { useCardMoves, type BoardData } from "./use-card-moves";
@@ -28,6 +28,9 @@ export function BoardView({ initial, viewer, filters }: { initial: BoardData; vi
   const { move, busy, notice } = useCardMoves(mutate);
   const [active, setActive] = useState<BoardCard | null>(null);
   const [pending, setPending] = useState<{ card: BoardCard; to: Stage } | null>(null);
+  // Lets tests (and impatient people) know the board is interactive, not just server-rendered.
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor, { coordinateGetter: laneCoordinates }));
 
   const curators = useMemo(() => Object.fromEntries(board.families.map((f) => [f.slug, f.curatorIds])), [board.families]);
@@ -81,7 +84,7 @@ export function BoardView({ initial, viewer, filters }: { initial: BoardData; vi
   };
 
   return (
-    <div>
+    <div data-board-ready={ready}>
       <BoardFilterBar filters={filters} families={board.families} authors={authors} />
       <div role="status" aria-live="polite" className="min-h-8">
         {notice ? (
@@ -96,6 +99,7 @@ export function BoardView({ initial, viewer, filters }: { initial: BoardData; vi
       </div>
       <DndContext
         sensors={sensors}
+        collisionDetection={laneCollision}
         onDragStart={(e: DragStartEvent) => setActive(cardById(e.active.id))}
         onDragEnd={onDragEnd}
         onDragCancel={() => setActive(null)}

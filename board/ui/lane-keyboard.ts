@@ -1,21 +1,24 @@
-import { KeyboardCode, type KeyboardCoordinateGetter } from "@dnd-kit/core";
+import { closestCenter, KeyboardCode, pointerWithin, type CollisionDetection, type KeyboardCoordinateGetter } from "@dnd-kit/core";
 
 /**
- * Keyboard dragging jumps a whole lane per arrow key (left/right) instead of nudging by pixels,
- * so a card can be carried from lane to lane with a few key presses.
+ * Keyboard dragging jumps a whole lane per arrow key (left/right) instead of nudging by pixels, so a card can be
+ * carried from lane to lane with a few key presses. Coordinates are the dragged card's top-left corner.
  */
 export const laneCoordinates: KeyboardCoordinateGetter = (event, { context, currentCoordinates }) => {
   if (event.code !== KeyboardCode.Right && event.code !== KeyboardCode.Left) return undefined;
   event.preventDefault();
-  const lanes = [...context.droppableRects.entries()]
-    .map(([id, rect]) => ({ id, rect }))
-    .filter((l) => context.droppableContainers.get(l.id) !== undefined)
-    .sort((a, b) => a.rect.left - b.rect.left);
-  if (lanes.length === 0) return currentCoordinates;
-  const x = currentCoordinates.x;
-  const centre = (l: (typeof lanes)[number]) => l.rect.left + l.rect.width / 2;
+  const width = context.collisionRect?.width ?? 0;
+  const lanes = [...context.droppableRects.values()].sort((a, b) => a.left - b.left);
+  const cardCentre = currentCoordinates.x + width / 2;
+  const centre = (r: (typeof lanes)[number]) => r.left + r.width / 2;
   const next =
-    event.code === KeyboardCode.Right ? lanes.find((l) => centre(l) > x + 4) : [...lanes].reverse().find((l) => centre(l) < x - 4);
+    event.code === KeyboardCode.Right ? lanes.find((r) => centre(r) > cardCentre + 4) : [...lanes].reverse().find((r) => centre(r) < cardCentre - 4);
   if (!next) return currentCoordinates;
-  return { x: centre(next), y: Math.min(currentCoordinates.y, next.rect.top + 80) };
+  return { x: centre(next) - width / 2, y: Math.max(next.top + 48, Math.min(currentCoordinates.y, next.top + 96)) };
+};
+
+/** The lane under the pointer; for keyboard drags (no pointer), the lane nearest the card. */
+export const laneCollision: CollisionDetection = (args) => {
+  const hits = args.pointerCoordinates ? pointerWithin(args) : [];
+  return hits.length > 0 ? hits : closestCenter(args);
 };

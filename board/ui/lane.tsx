@@ -31,7 +31,7 @@ export function Lane({ stage, count, state, children }: { stage: Stage; count: n
       aria-label={`${meta.label} lane, ${count} proposals`}
       data-testid={`lane-${stage}`}
       data-lane-state={state}
-      className={`flex min-h-40 w-72 shrink-0 flex-col rounded-xl border-2 bg-paper-deep/50 p-2 transition-colors ${STATE_CLASS[state]} ${isOver && state === "allowed" ? "ring-2 ring-copper" : ""}`}
+      className={`flex min-h-40 w-64 shrink-0 flex-col rounded-xl border-2 bg-paper-deep/50 p-2 transition-colors ${STATE_CLASS[state]} ${isOver && state === "allowed" ? "ring-2 ring-copper" : ""}`}
     >
       <header className="mb-2 flex items-baseline gap-2 px-1">
         <span aria-hidden className="text-lg leading-none text-copper-deep">

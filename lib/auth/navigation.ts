@@ -7,8 +7,12 @@ export interface NavItem {
   roles: readonly Role[];
 }
 
+/** The roles that take part in review and may see proposals. */
+export const BOARD_ROLES = ["author", "reviewer", "curator", "admin"] as const;
+
 export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/", label: "Overview", roles: [] },
+  { href: "/board", label: "Review board", roles: BOARD_ROLES },
   { href: "/families", label: "Model families", roles: [] },
   { href: "/admin/people", label: "People", roles: ["admin"] },
   { href: "/admin/mailbox", label: "Mail catcher", roles: ["admin"] },

@@ -35,6 +35,10 @@ describe("navigation by role", () => {
   it("gives everyone the overview and their account", () => {
     expect(hrefs([])).toEqual(["/", "/families", "/account"]);
   });
+  it("shows the review board to those who take part in review, not to consumers", () => {
+    for (const role of ["author", "reviewer", "curator", "admin"] as const) expect(hrefs([role])).toContain("/board");
+    expect(hrefs(["consumer"])).not.toContain("/board");
+  });
 });
 
 describe("sign-in throttling", () => {

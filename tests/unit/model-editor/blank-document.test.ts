@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { computeBands } from "@/lib/tb/bands";
 import { validateModelDocument } from "@/lib/tb/document";
 import { compileModel } from "@/lib/tb/model";
-import { blankModelDocument } from "@/app/_components/model-editor/blank-document";
+import { blankModelDocument } from "@/lib/tb/blank-document";
 
 describe("blank model document", () => {
   for (const dimension of [1, 2, 3] as const) {

@@ -1,0 +1,35 @@
+import type { ErrorBody } from "./errors";
+
+/** An error answer from our API, with its coded error kept intact for the UI. */
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly details?: Record<string, unknown>,
+    readonly fieldErrors?: Record<string, string[]>,
+  ) {
+    super(message);
+    this.name = "ApiError";
+  }
+}
+
+async function toApiError(res: Response): Promise<ApiError> {
+  try {
+    const body = (await res.json()) as ErrorBody;
+    return new ApiError(res.status, body.error.code, body.error.message, body.error.details, body.error.fieldErrors);
+  } catch {
+    return new ApiError(res.status, "internal:error", `The server answered ${res.status}.`);
+  }
+}
+
+/** The one fetcher for SWR and for mutations: JSON in, JSON out, coded errors thrown as ApiError. */
+export async function fetchJson<T>(url: string, init?: { method?: string; body?: unknown }): Promise<T> {
+  const res = await fetch(url, {
+    method: init?.method ?? "GET",
+    headers: init?.body === undefined ? undefined : { "content-type": "application/json" },
+    body: init?.body === undefined ? undefined : JSON.stringify(init.body),
+  });
+  if (!res.ok) throw await toApiError(res);
+  return (await res.json()) as T;
+}
