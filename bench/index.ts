@@ -1,12 +1,7 @@
-import { existsSync } from "node:fs";
 import { runBandsBench } from "./bands";
+import { runEigenBench } from "./eigen";
 
-const eigenBench = new URL("./eigen.ts", import.meta.url);
-if (existsSync(eigenBench)) {
-  const { runEigenBench } = (await import(eigenBench.href)) as { runEigenBench: () => Promise<void> };
-  await runEigenBench();
-} else {
-  console.log("eigen-solver benchmark skipped: bench/eigen.ts is not there yet");
-}
+/** npm run bench: every speed goal, as ratios against references measured in the same run. */
+await runEigenBench();
 console.log("");
 await runBandsBench();

@@ -1,7 +1,7 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { modelFamilies } from "@/db/schema";
+import { modelFamilies, releases } from "@/db/schema";
 
 const summaryColumns = {
   id: modelFamilies.id,
@@ -14,6 +14,17 @@ const summaryColumns = {
 
 export function listFamilies() {
   return db.select(summaryColumns).from(modelFamilies).orderBy(modelFamilies.dimension, modelFamilies.title);
+}
+
+/** The newest release's document, or the family's starting document while it has none. */
+export async function getCurrentFamilyDocument(familyId: string, startingDocument: unknown) {
+  const [latest] = await db
+    .select({ version: releases.version, document: releases.document })
+    .from(releases)
+    .where(eq(releases.familyId, familyId))
+    .orderBy(desc(releases.createdAt))
+    .limit(1);
+  return latest ? { label: `release ${latest.version}`, document: latest.document } : startingDocument ? { label: "starting parameter set", document: startingDocument } : null;
 }
 
 export async function getFamilyBySlug(slug: string) {

@@ -8,11 +8,18 @@ export const metadata: Metadata = { title: "Model families" };
 export const dynamic = "force-dynamic";
 
 export default async function FamiliesPage() {
-  await requirePageUser("/families");
+  const user = await requirePageUser("/families");
   const families = await listFamilies();
   return (
     <>
-      <PageTitle title="Model families" lead="One line of models per material; each family collects its proposals and releases." />
+      <div className="flex items-start justify-between gap-4">
+        <PageTitle title="Model families" lead="One line of models per material; each family collects its proposals and releases." />
+        {user.roles.includes("curator") ? (
+          <Link href="/families/new" className="shrink-0 rounded-md border border-copper px-4 py-2 font-semibold text-copper-deep hover:bg-copper-pale">
+            Open a family
+          </Link>
+        ) : null}
+      </div>
       <div className="grid gap-4 md:grid-cols-3">
         {families.map((f) => (
           <Link key={f.id} href={`/families/${f.slug}`} className="rounded-xl border border-rule bg-card p-4 hover:border-copper">

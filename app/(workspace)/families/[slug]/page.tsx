@@ -1,11 +1,12 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { BandPlot } from "@/app/_components/band-plot";
 import { FormMessage } from "@/app/_components/form-parts";
 import { PageTitle } from "@/app/_components/page-title";
 import { SafetyNote } from "@/app/_components/safety-note";
 import { requirePageUser } from "@/lib/auth/guard";
-import { getFamilyBySlug } from "@/lib/families/queries";
+import { getCurrentFamilyDocument, getFamilyBySlug } from "@/lib/families/queries";
 import { buildModelView } from "@/lib/families/view";
 import { ParameterTable } from "./parameter-table";
 
@@ -17,14 +18,24 @@ export default async function FamilyPage({ params }: { params: Promise<{ slug: s
   await requirePageUser(`/families/${slug}`);
   const family = await getFamilyBySlug(slug);
   if (!family) notFound();
-  const result = family.startingDocument ? buildModelView(family.startingDocument) : null;
+  const current = await getCurrentFamilyDocument(family.id, family.startingDocument);
+  const result = current ? buildModelView(current.document) : null;
   return (
     <>
       <PageTitle title={family.title} lead={family.description} />
       {family.isDemo ? (
         <p className="mb-4 inline-block rounded bg-paper-deep px-2 py-0.5 text-sm">Demo family: every value here is invented for illustration.</p>
       ) : null}
-      {!result ? <p className="text-ink-soft">This family has no parameter set yet.</p> : null}
+      <p className="mb-4 flex flex-wrap gap-4 text-sm">
+        <Link href={`/board?family=${family.slug}`} className="text-copper-deep underline">
+          Proposals of this family on the board
+        </Link>
+        <Link href={`/proposals/new?family=${family.slug}`} className="text-copper-deep underline">
+          Propose a change
+        </Link>
+        {current ? <span className="text-ink-soft">Showing the {current.label}.</span> : null}
+      </p>
+      {!result ? <p className="text-ink-soft">This family has no parameter set yet; its first proposal starts from a blank model.</p> : null}
       {result && !result.ok ? (
         <FormMessage kind="error">
           The stored parameter set does not validate: {result.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}
@@ -37,7 +48,7 @@ export default async function FamilyPage({ params }: { params: Promise<{ slug: s
               title={`Bands of ${result.view.doc.name} along the default path`}
               distance={result.view.path.distance}
               ticks={result.view.path.ticks}
-              series={[{ role: "proposal", label: `${result.view.doc.name} (working set)`, energies: result.view.path.energies }]}
+              series={[{ role: "proposal", label: `${result.view.doc.name} (${current?.label})`, energies: result.view.path.energies }]}
               fermiLevel={result.view.fermiLevel}
             />
             <dl className="space-y-3 text-sm">
