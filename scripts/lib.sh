@@ -126,3 +126,17 @@ kill_tree() {
   for child in $(pgrep -P "$pid" 2>/dev/null); do kill_tree "$child"; done
   kill "$pid" 2>/dev/null || true
 }
+
+# Children started with `start_child`, stopped (with PostgreSQL if this run started it) on exit or Ctrl-C.
+CHILDREN=()
+start_child() { "$@" & CHILDREN+=($!); }
+cleanup() {
+  trap - EXIT INT TERM
+  for pid in "${CHILDREN[@]}"; do kill_tree "$pid"; done
+  for pid in "${CHILDREN[@]}"; do wait "$pid" 2>/dev/null || true; done
+  pg_down
+}
+install_cleanup() {
+  trap cleanup EXIT
+  trap 'exit 130' INT TERM
+}

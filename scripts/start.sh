@@ -6,15 +6,7 @@ source scripts/lib.sh
 
 PORT="${PORT:-3000}"
 DEV=0; [ "${1:-}" = "--dev" ] && DEV=1
-CHILDREN=()
-cleanup() {
-  trap - EXIT INT TERM
-  for pid in "${CHILDREN[@]}"; do kill_tree "$pid"; done
-  for pid in "${CHILDREN[@]}"; do wait "$pid" 2>/dev/null || true; done
-  pg_down
-}
-trap cleanup EXIT
-trap 'exit 130' INT TERM
+install_cleanup
 
 ensure_node_modules
 if [ -z "${DATABASE_URL:-}" ]; then
@@ -32,15 +24,15 @@ node_modules/.bin/tsx --conditions=react-server db/seed.ts
 
 if [ -z "${SMTP_HOST:-}" ]; then
   export SMTP_HOST=127.0.0.1 SMTP_PORT="${FAKE_SMTP_PORT:-2525}"
-  node_modules/.bin/tsx mail/fake-smtp-main.ts & CHILDREN+=($!)
+  start_child node_modules/.bin/tsx mail/fake-smtp-main.ts
   wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; exit 1; }
 fi
 
 if [ "$DEV" -eq 1 ]; then
-  node_modules/.bin/next dev -p "$PORT" & CHILDREN+=($!)
+  start_child node_modules/.bin/next dev -p "$PORT"
 else
   build_if_needed
   log "serving on http://localhost:$PORT (Ctrl-C stops everything this command started)"
-  node_modules/.bin/next start -p "$PORT" -H "${HOST:-127.0.0.1}" & CHILDREN+=($!)
+  start_child node_modules/.bin/next start -p "$PORT" -H "${HOST:-127.0.0.1}"
 fi
 wait "${CHILDREN[-1]}"

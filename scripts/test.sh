@@ -6,15 +6,7 @@ cd "$(dirname "$0")/.."
 source scripts/lib.sh
 
 TEST_PG_PORT=54339
-CHILDREN=()
-cleanup() {
-  trap - EXIT INT TERM
-  for pid in "${CHILDREN[@]}"; do kill_tree "$pid"; done
-  for pid in "${CHILDREN[@]}"; do wait "$pid" 2>/dev/null || true; done
-  pg_down
-}
-trap cleanup EXIT
-trap 'exit 130' INT TERM
+install_cleanup
 
 ensure_node_modules
 ensure_chromium
@@ -29,7 +21,7 @@ export SMTP_HOST=127.0.0.1 SMTP_PORT=2535 MAIL_FROM="Bandgate test <bandgate@tes
 export BANDGATE_ENV=test
 
 npx tsx db/migrate.ts
-node_modules/.bin/tsx mail/fake-smtp-main.ts & CHILDREN+=($!)
+start_child node_modules/.bin/tsx mail/fake-smtp-main.ts
 wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; exit 1; }
 build_if_needed
 

@@ -32,3 +32,17 @@ export function FormMessage({ kind, children }: { kind: "error" | "ok"; children
     </div>
   );
 }
+
+/** New password twice, as used when joining, resetting and changing a password. */
+export function NewPasswordFields({ fieldErrors, label = "New password", repeatLabel = "Repeat the password" }: { fieldErrors: Record<string, string[]>; label?: string; repeatLabel?: string }) {
+  return (
+    <>
+      <Field label={label} name="password" errors={fieldErrors.password ?? fieldErrors.token} hint="At least 10 characters.">
+        <input id="password" name="password" type="password" autoComplete="new-password" className={inputClass} />
+      </Field>
+      <Field label={repeatLabel} name="confirm" errors={fieldErrors.confirm}>
+        <input id="confirm" name="confirm" type="password" autoComplete="new-password" className={inputClass} />
+      </Field>
+    </>
+  );
+}

@@ -1,7 +1,7 @@
 "use client";
 
 import { ActionForm } from "@/app/_components/action-form";
-import { Field, inputClass, primaryButtonClass } from "@/app/_components/form-parts";
+import { Field, inputClass, NewPasswordFields, primaryButtonClass } from "@/app/_components/form-parts";
 import { changePasswordAction } from "./actions";
 
 export function PasswordForm() {
@@ -13,12 +13,7 @@ export function PasswordForm() {
           <Field label="Current password" name="current" errors={fieldErrors.current}>
             <input id="current" name="current" type="password" autoComplete="current-password" className={inputClass} />
           </Field>
-          <Field label="New password" name="password" errors={fieldErrors.password} hint="At least 10 characters.">
-            <input id="password" name="password" type="password" autoComplete="new-password" className={inputClass} />
-          </Field>
-          <Field label="Repeat the new password" name="confirm" errors={fieldErrors.confirm}>
-            <input id="confirm" name="confirm" type="password" autoComplete="new-password" className={inputClass} />
-          </Field>
+          <NewPasswordFields fieldErrors={fieldErrors} repeatLabel="Repeat the new password" />
           <button type="submit" disabled={pending} className={primaryButtonClass}>
             Change password
           </button>

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { ActionForm } from "@/app/_components/action-form";
-import { Field, inputClass, primaryButtonClass } from "@/app/_components/form-parts";
+import { NewPasswordFields, primaryButtonClass } from "@/app/_components/form-parts";
 import { resetPasswordAction } from "../actions";
 
 export function ResetForm({ token }: { token: string }) {
@@ -22,12 +22,7 @@ export function ResetForm({ token }: { token: string }) {
       {({ fieldErrors, pending }) => (
         <>
           <input type="hidden" name="token" value={token} />
-          <Field label="New password" name="password" errors={fieldErrors.password ?? fieldErrors.token} hint="At least 10 characters.">
-            <input id="password" name="password" type="password" autoComplete="new-password" className={inputClass} />
-          </Field>
-          <Field label="Repeat the password" name="confirm" errors={fieldErrors.confirm}>
-            <input id="confirm" name="confirm" type="password" autoComplete="new-password" className={inputClass} />
-          </Field>
+          <NewPasswordFields fieldErrors={fieldErrors} />
           <button type="submit" disabled={pending} className={primaryButtonClass}>
             {pending ? "Saving…" : "Change password"}
           </button>
