@@ -7,7 +7,7 @@ import { computeEnergiesFlat } from "../lib/tb/bands";
 import { DEFAULT_CONVENTIONS } from "../lib/tb/conventions";
 import { parseModelDocument, type ModelDocument } from "../lib/tb/document";
 import { createEigenWorkspace, eigHermitian } from "../lib/tb/eigen";
-import { fillHamiltonian } from "../lib/tb/hamiltonian";
+import { fillHamiltonianLower } from "../lib/tb/hamiltonian";
 import { compileModel, type CompiledModel } from "../lib/tb/model";
 import type { Orbital } from "../lib/tb/orbitals";
 import { createBandWorkerPool } from "../lib/tb/parallel-bands";
@@ -67,10 +67,9 @@ function best(reps: number, run: () => void): number {
 function withVectors(model: CompiledModel, k: Float64Array): void {
   const n = model.size;
   const re = new Float64Array(n * n), im = new Float64Array(n * n), values = new Float64Array(n);
-  const vr = new Float64Array(n * n), vi = new Float64Array(n * n), ws = createEigenWorkspace(n), kp = new Float64Array(3);
+  const vr = new Float64Array(n * n), vi = new Float64Array(n * n), ws = createEigenWorkspace(n);
   for (let i = 0; i < k.length / 3; i++) {
-    kp.set(k.subarray(3 * i, 3 * i + 3));
-    fillHamiltonian(model, kp, re, im);
+    fillHamiltonianLower(model, k, re, im, 3 * i);
     eigHermitian(n, re, im, values, vr, vi, ws);
   }
 }

@@ -1,5 +1,5 @@
 import { createEigenWorkspace, eigHermitian, eigvalsHermitian } from "./eigen";
-import { fillHamiltonian } from "./hamiltonian";
+import { fillHamiltonianLower } from "./hamiltonian";
 import type { CompiledModel } from "./model";
 
 export interface BandResult {
@@ -17,7 +17,7 @@ export function computeBands(model: CompiledModel, kFrac: ArrayLike<number>[], o
   const energies: Float64Array[] = [];
   const vectors: { re: Float64Array; im: Float64Array }[] = [];
   for (const k of kFrac) {
-    fillHamiltonian(model, k, re, im);
+    fillHamiltonianLower(model, k, re, im);
     const values = new Float64Array(n);
     if (opts.vectors) {
       const v = { re: new Float64Array(n * n), im: new Float64Array(n * n) };
@@ -33,18 +33,18 @@ export function computeBands(model: CompiledModel, kFrac: ArrayLike<number>[], o
 
 /**
  * Eigenvalues only, written into one flat array (k-major, `size` per k-point): the allocation-free path used
- * by the benchmark and the worker threads. `kFlat` holds `dimension` numbers per k-point.
+ * by the benchmark and the worker threads. `kFlat` holds `dimension` numbers per k-point; only k-points
+ * first..end−1 are solved (all by default), each written at its own place in `out`.
  */
-export function computeEnergiesFlat(model: CompiledModel, kFlat: Float64Array, out: Float64Array): void {
+export function computeEnergiesFlat(
+  model: CompiledModel, kFlat: Float64Array, out: Float64Array, first = 0, end = kFlat.length / model.dimension,
+): void {
   const n = model.size, d = model.dimension;
-  const count = kFlat.length / d;
   const re = new Float64Array(n * n), im = new Float64Array(n * n);
   const ws = createEigenWorkspace(n);
   const values = new Float64Array(n);
-  const kp = new Float64Array(d);
-  for (let k = 0; k < count; k++) {
-    for (let c = 0; c < d; c++) kp[c] = kFlat[k * d + c];
-    fillHamiltonian(model, kp, re, im);
+  for (let k = first; k < end; k++) {
+    fillHamiltonianLower(model, kFlat, re, im, k * d);
     eigvalsHermitian(n, re, im, values, ws);
     out.set(values, k * n);
   }

@@ -1,22 +1,30 @@
 import { parentPort } from "node:worker_threads";
 import { computeEnergiesFlat } from "./bands";
 import type { CompiledModel } from "./model";
+import type { BatchRequest, WorkerReply } from "./parallel-bands-protocol";
 
-/** Worker side of parallel-bands.ts: keeps one compiled model, answers energy requests for k-point chunks. */
+/**
+ * Worker side of parallel-bands.ts: keeps one compiled model; for a batch it takes chunks of k-points from the
+ * shared counter until none are left, writing energies straight into the shared output.
+ */
 let model: CompiledModel | null = null;
 
-parentPort?.on("message", (msg: { type: "model"; model: CompiledModel } | { type: "energies"; id: number; k: Float64Array }) => {
+const reply = (msg: WorkerReply) => parentPort?.postMessage(msg);
+
+parentPort?.on("message", (msg: { type: "model"; model: CompiledModel } | BatchRequest) => {
   if (msg.type === "model") {
     model = msg.model;
-    parentPort?.postMessage({ type: "ready" });
+    reply({ type: "ready" });
     return;
   }
   try {
     if (!model) throw new Error("no model set");
-    const out = new Float64Array((msg.k.length / model.dimension) * model.size);
-    computeEnergiesFlat(model, msg.k, out);
-    parentPort?.postMessage({ type: "energies", id: msg.id, out }, [out.buffer as ArrayBuffer]);
+    const { k, out, next, count, chunk } = msg;
+    for (let first = Atomics.add(next, 0, chunk); first < count; first = Atomics.add(next, 0, chunk)) {
+      computeEnergiesFlat(model, k, out, first, Math.min(count, first + chunk));
+    }
+    reply({ type: "done", id: msg.id });
   } catch (e) {
-    parentPort?.postMessage({ type: "error", id: msg.id, message: e instanceof Error ? e.message : String(e) });
+    reply({ type: "error", id: msg.id, message: e instanceof Error ? e.message : String(e) });
   }
 });
