@@ -66,71 +66,13 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
           </span>
         </p>
       </header>
-      <div className="grid gap-8 xl:grid-cols-[1fr_22rem]">
+      <div className="grid gap-8 lg:grid-cols-2 xl:grid-cols-[1fr_20rem_22rem]">
         <div className="min-w-0 space-y-8">
           {proposal.rationale ? (
             <Section title="Rationale">
               <Markdown text={proposal.rationale} />
             </Section>
           ) : null}
-          {may.revise && latest ? (
-            <Section title="Parameters">
-              <RevisionEditor proposalId={proposal.id} version={proposal.version} document={latest.document} baseDocument={baseDocument} />
-            </Section>
-          ) : (
-            <>
-              {comparison ? (
-                <Section title="Bands">
-                  <BandPlot title={`Bands of ${proposal.title}: base, proposed and reference`} distance={comparison.distance} ticks={comparison.ticks} series={series} />
-                </Section>
-              ) : null}
-              {latestDocument ? (
-                <Section title="Changed parameters">
-                  <ParameterChanges changes={changedParameters(baseDocument, latestDocument)} />
-                </Section>
-              ) : null}
-            </>
-          )}
-          {latest ? (
-            <Section title={`Checks of revision ${latest.number}`}>
-              <ChecksPanel checks={latest.checkResults} waivedReason={latest.checksWaivedReason} />
-              {may.waive ? <WaiverForm proposalId={proposal.id} version={proposal.version} /> : null}
-            </Section>
-          ) : null}
-          <Section title="Reference bands">
-            <ul className="mb-3 space-y-1 text-sm">
-              {view.references.map((r) => (
-                <li key={r.id}>
-                  <span className="font-semibold">{r.name}</span> <span className="num text-xs text-ink-soft">{r.fileName} · sha256 {r.sha256.slice(0, 12)}…</span>
-                  <span className="block text-xs text-ink-soft">
-                    {Object.entries(r.provenance)
-                      .filter(([, v]) => v)
-                      .map(([k, v]) => `${k}: ${v}`)
-                      .join(" · ")}
-                  </span>
-                </li>
-              ))}
-              {view.references.length === 0 ? <li className="text-ink-soft">None attached.</li> : null}
-            </ul>
-            {may.revise ? <ReferenceUploadForm proposalId={proposal.id} /> : null}
-          </Section>
-          <Section title="Revisions">
-            <ol className="space-y-1 text-sm">
-              {view.revisions.map((r) => (
-                <li key={r.id} className="grid grid-cols-[3rem_1fr] gap-2">
-                  <span className="num font-semibold">r{r.number}</span>
-                  <span>
-                    {r.note || <em className="text-ink-soft">no note</em>}
-                    <span className="num block text-xs text-ink-soft">
-                      sha256 {r.sha256.slice(0, 12)}… · physics {r.physicsHash.slice(0, 12)}… · {r.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC
-                      {r.checksPassing ? " · checks pass" : " · checks fail"}
-                    </span>
-                  </span>
-                </li>
-              ))}
-            </ol>
-          </Section>
-          {latestDocument ? <SafetyNote validity={validityText(latestDocument)} /> : null}
         </div>
         <aside className="space-y-8">
           <Section title="Stage and gate">
@@ -146,6 +88,8 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
               <dd>{view.facts.checksPassing ? "✓ pass" : view.facts.checksWaived ? "≈ waived" : "✕ fail"}</dd>
             </dl>
           </Section>
+        </aside>
+        <aside className="space-y-8">
           <Section title="Reviewers">
             <ReviewersPanel proposalId={proposal.id} version={proposal.version} reviewers={view.reviewers} candidates={candidates} canManage={may.manageReviewers} />
           </Section>
@@ -165,6 +109,66 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
             {may.giveVerdict ? <VerdictForm proposalId={proposal.id} /> : null}
           </Section>
         </aside>
+      </div>
+      <div className="mt-8 space-y-8">
+        {may.revise && latest ? (
+          <Section title="Parameters">
+            <RevisionEditor proposalId={proposal.id} version={proposal.version} document={latest.document} baseDocument={baseDocument} />
+          </Section>
+        ) : (
+          <>
+            {comparison ? (
+              <Section title="Bands">
+                <BandPlot title={`Bands of ${proposal.title}: base, proposed and reference`} distance={comparison.distance} ticks={comparison.ticks} series={series} />
+              </Section>
+            ) : null}
+            {latestDocument ? (
+              <Section title="Changed parameters">
+                <ParameterChanges changes={changedParameters(baseDocument, latestDocument)} />
+              </Section>
+            ) : null}
+          </>
+        )}
+        {latest ? (
+          <Section title={`Checks of revision ${latest.number}`}>
+            <ChecksPanel checks={latest.checkResults} waivedReason={latest.checksWaivedReason} />
+            {may.waive ? <WaiverForm proposalId={proposal.id} version={proposal.version} /> : null}
+          </Section>
+        ) : null}
+        <Section title="Reference bands">
+          <ul className="mb-3 space-y-1 text-sm">
+            {view.references.map((r) => (
+              <li key={r.id}>
+                <span className="font-semibold">{r.name}</span> <span className="num text-xs text-ink-soft">{r.fileName} · sha256 {r.sha256.slice(0, 12)}…</span>
+                <span className="block text-xs text-ink-soft">
+                  {Object.entries(r.provenance)
+                    .filter(([, v]) => v)
+                    .map(([k, v]) => `${k}: ${v}`)
+                    .join(" · ")}
+                </span>
+              </li>
+            ))}
+            {view.references.length === 0 ? <li className="text-ink-soft">None attached.</li> : null}
+          </ul>
+          {may.revise ? <ReferenceUploadForm proposalId={proposal.id} /> : null}
+        </Section>
+        <Section title="Revisions">
+          <ol className="space-y-1 text-sm">
+            {view.revisions.map((r) => (
+              <li key={r.id} className="grid grid-cols-[3rem_1fr] gap-2">
+                <span className="num font-semibold">r{r.number}</span>
+                <span>
+                  {r.note || <em className="text-ink-soft">no note</em>}
+                  <span className="num block text-xs text-ink-soft">
+                    sha256 {r.sha256.slice(0, 12)}… · physics {r.physicsHash.slice(0, 12)}… · {r.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC
+                    {r.checksPassing ? " · checks pass" : " · checks fail"}
+                  </span>
+                </span>
+              </li>
+            ))}
+          </ol>
+        </Section>
+        {latestDocument ? <SafetyNote validity={validityText(latestDocument)} /> : null}
       </div>
     </>
   );
