@@ -9,8 +9,11 @@
 
 const EPS = Number.EPSILON;
 export const SWEEPS_PER_EIGENVALUE = 30;
-/** Below this, p·t might lose accuracy to underflow; the step then divides twice. */
+/** Outside (SAFE_PRODUCT, SAFE_LARGE), p·t or the squares formed from it might underflow or overflow; the step
+ *  then divides twice. Within it p < 2^450 (as t ≥ p) and the matrix is scaled to norm ≤ 1, so N = p(α−σ) − bb·γ
+ *  (see the loop), N² and N²/(p·t) stay finite. */
 const SAFE_PRODUCT = 2 ** -900;
+const SAFE_LARGE = 2 ** 900;
 
 export function tridiagonalEigenvalues(n: number, diag: Float64Array, off: Float64Array): void {
   const scale = normalise(n, diag, off);
@@ -50,24 +53,29 @@ export function eigenvaluesOfNormalised(diag: Float64Array, off: Float64Array, f
       const t = p + bb;
       if (i !== m - 1) off[i + 1] = s * t;
       const oldC = c;
-      // c = p/t, s = bb/t and 1/c = t/p from one division: the step is latency-bound, and divisions dominate.
+      const oldGamma = gamma;
+      const alpha = diag[i];
+      // With r = 1/(p·t): c = p/t = p²r, s = bb/t = bb·p·r, and for N = p(α−σ) − bb·γ_old the new
+      // γ = c(α−σ) − s·γ_old = N·p·r and p = γ²/c = N²·r. The loop is latency-bound, and this leaves one
+      // addition, one multiplication, one division and one multiplication from p to the next p (N, c and s
+      // are computed beside that chain). Outside the safe range of p·t the plain divisions are used.
       const pt = p * t;
-      let invC: number;
-      if (pt > SAFE_PRODUCT) {
+      if (pt > SAFE_PRODUCT && pt < SAFE_LARGE) {
         const r = 1 / pt;
-        c = p * p * r;
-        s = bb * p * r;
-        invC = t * t * r;
+        const pr = p * r;
+        const num = p * (alpha - sigma) - bb * oldGamma;
+        c = p * pr;
+        s = bb * pr;
+        gamma = num * pr;
+        diag[i + 1] = oldGamma + (alpha - gamma);
+        p = num * num * r;
       } else {
         c = p / t;
         s = bb / t;
-        invC = 1 / c;
+        gamma = c * (alpha - sigma) - s * oldGamma;
+        diag[i + 1] = oldGamma + (alpha - gamma);
+        p = c !== 0 ? (gamma * gamma) / c : oldC * bb;
       }
-      const oldGamma = gamma;
-      const alpha = diag[i];
-      gamma = c * (alpha - sigma) - s * oldGamma;
-      diag[i + 1] = oldGamma + (alpha - gamma);
-      p = c !== 0 ? gamma * gamma * invC : oldC * bb;
     }
     off[l] = s * p;
     diag[l] = sigma + gamma;
