@@ -1,7 +1,12 @@
+import { closeDb } from "@/db/client";
 import { runBandsBench } from "./bands";
+import { runBoardBench } from "./board";
 import { runEigenBench } from "./eigen";
 
 /** npm run bench: every speed goal, as ratios against references measured in the same run. */
 await runEigenBench();
 console.log("");
 await runBandsBench();
+console.log("");
+await runBoardBench();
+await closeDb();

@@ -16,18 +16,31 @@ type Conn = Database | Tx;
  * One query for any number of cards: latest revision, fresh verdict tally (each assigned non-author reviewer's latest
  * verdict on the current physics hash) and open blocking remarks, computed in PostgreSQL.
  */
+// Every part is materialised once: left to itself the planner may re-run the tally for each card (seen: 0.7 s for
+// 167 cards of 1,000), because it cannot estimate the size of the CTEs.
 function cardQuery(where: SQL): SQL {
   return sql`
-    with latest as (
+    with picked as materialized (
+      select p.* from proposals p join model_families f on f.id = p.family_id
+      where ${where}
+      order by p.updated_at desc
+      limit 2000
+    ),
+    latest as materialized (
       select distinct on (r.proposal_id) r.proposal_id, r.number, r.physics_hash, r.checks_passing,
              r.checks_waived_reason is not null as waived, r.shift_profile, r.max_shift
-      from revisions r order by r.proposal_id, r.number desc
+      from revisions r where r.proposal_id in (select id from picked) order by r.proposal_id, r.number desc
     ),
-    last_verdicts as (
+    last_verdicts as materialized (
       select distinct on (v.proposal_id, v.reviewer_id) v.proposal_id, v.reviewer_id, v.verdict, v.physics_hash
-      from verdicts v order by v.proposal_id, v.reviewer_id, v.created_at desc
+      from verdicts v where v.proposal_id in (select id from picked) order by v.proposal_id, v.reviewer_id, v.created_at desc
     ),
-    tally as (
+    assigned as materialized (
+      select ra.proposal_id, json_agg(json_build_object('id', u.id, 'name', u.name) order by u.name) as reviewers
+      from reviewer_assignments ra join users u on u.id = ra.reviewer_id
+      where ra.proposal_id in (select id from picked) group by ra.proposal_id
+    ),
+    tally as materialized (
       select lv.proposal_id,
         count(*) filter (where lv.physics_hash = l.physics_hash and lv.verdict = 'accept') as accept,
         count(*) filter (where lv.physics_hash = l.physics_hash and lv.verdict = 'minor_revision') as minor_revision,
@@ -36,31 +49,29 @@ function cardQuery(where: SQL): SQL {
         count(*) filter (where lv.physics_hash <> l.physics_hash) as stale
       from last_verdicts lv
       join latest l on l.proposal_id = lv.proposal_id
-      join proposals pp on pp.id = lv.proposal_id and pp.author_id <> lv.reviewer_id
+      join picked pp on pp.id = lv.proposal_id and pp.author_id <> lv.reviewer_id
       join reviewer_assignments ra on ra.proposal_id = lv.proposal_id and ra.reviewer_id = lv.reviewer_id
       group by lv.proposal_id
     ),
-    blocking as (
-      select proposal_id, count(*) as n from remarks where blocking and status <> 'resolved' group by proposal_id
+    blocking as materialized (
+      select proposal_id, count(*) as n from remarks
+      where blocking and status <> 'resolved' and proposal_id in (select id from picked) group by proposal_id
     )
     select p.id, p.title, p.stage, p.version, p.updated_at, p.author_id, au.name as author_name,
       f.slug as family_slug, f.title as family_title, f.required_accepts, br.version as base_version,
       coalesce(l.number, 0) as revision, coalesce(l.checks_passing, false) as checks_passing, coalesce(l.waived, false) as checks_waived,
-      l.shift_profile, l.max_shift,
-      coalesce((select json_agg(json_build_object('id', u.id, 'name', u.name) order by u.name)
-                from reviewer_assignments ra join users u on u.id = ra.reviewer_id where ra.proposal_id = p.id), '[]'::json) as reviewers,
+      l.shift_profile, l.max_shift, coalesce(a.reviewers, '[]'::json) as reviewers,
       coalesce(t.accept, 0) as accept, coalesce(t.minor_revision, 0) as minor_revision, coalesce(t.major_revision, 0) as major_revision,
       coalesce(t.decline, 0) as decline, coalesce(t.stale, 0) as stale, coalesce(b.n, 0) as blocking
-    from proposals p
+    from picked p
     join model_families f on f.id = p.family_id
     join users au on au.id = p.author_id
     left join releases br on br.id = p.base_release_id
     left join latest l on l.proposal_id = p.id
+    left join assigned a on a.proposal_id = p.id
     left join tally t on t.proposal_id = p.id
     left join blocking b on b.proposal_id = p.id
-    where ${where}
-    order by p.updated_at desc
-    limit 2000`;
+    order by p.updated_at desc`;
 }
 
 function toCard(r: Record<string, unknown>): BoardCard {

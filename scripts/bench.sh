@@ -1,0 +1,15 @@
+#!/usr/bin/env bash
+# npm run bench: speed goals as ratios against references measured in the same run. The board benchmark uses a
+# scratch database on the test cluster, which this script starts (and stops again if it started it).
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib.sh
+install_cleanup
+
+ensure_node_modules
+ensure_postgres_binaries
+pg_up "$PWD/.data/pg-test" 54339
+recreate_database 54339 bandgate_bench
+export DATABASE_URL="postgres://postgres@127.0.0.1:54339/bandgate_bench"
+node_modules/.bin/tsx db/migrate.ts >/dev/null
+node_modules/.bin/tsx --conditions=react-server bench/index.ts
