@@ -174,6 +174,12 @@ export const releases = pgTable(
     proposalId: uuid("proposal_id").references((): AnyPgColumn => proposals.id),
     releasedBy: uuid("released_by").references(() => users.id),
     createdAt: createdAt(),
+    /** Deprecation and withdrawal are the only changes a release accepts (a trigger guards the rest). */
+    deprecatedAt: timestamp("deprecated_at", { withTimezone: true }),
+    deprecationReason: text("deprecation_reason"),
+    successorId: uuid("successor_id").references((): AnyPgColumn => releases.id),
+    withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
+    withdrawalReason: text("withdrawal_reason"),
   },
   (t) => [uniqueIndex("releases_family_version_key").on(t.familyId, t.version), index("releases_family_idx").on(t.familyId, t.createdAt)],
 );
@@ -322,3 +328,5 @@ export const remarks = pgTable(
   (t) => [index("remarks_proposal_idx").on(t.proposalId, t.status)],
 );
 export type Remark = typeof remarks.$inferSelect;
+
+export * from "./schema-registry";
