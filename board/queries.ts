@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, desc, eq, sql, type SQL } from "drizzle-orm";
 import { db, type Database, type Tx } from "@/db/client";
-import { familyCurators, modelFamilies, proposals, referenceBandSets, releases, reviewerAssignments, revisions, users } from "@/db/schema";
+import { familyCurators, modelFamilies, proposals, referenceBandSets, releases, remarks, reviewerAssignments, revisions, users } from "@/db/schema";
 import type { Role } from "@/lib/auth/roles";
 import type { BoardFilters } from "./schemas";
 import type { BoardCard } from "./card";
@@ -202,3 +202,26 @@ export function listFamiliesWithCurators() {
     .orderBy(modelFamilies.title);
 }
 
+
+export function listRemarks(proposalId: string) {
+  return db
+    .select({
+      id: remarks.id,
+      parentId: remarks.parentId,
+      body: remarks.body,
+      blocking: remarks.blocking,
+      anchor: remarks.anchor,
+      status: remarks.status,
+      version: remarks.version,
+      createdAt: remarks.createdAt,
+      updatedAt: remarks.updatedAt,
+      writerId: remarks.authorId,
+      writerName: users.name,
+      revision: revisions.number,
+    })
+    .from(remarks)
+    .innerJoin(users, eq(users.id, remarks.authorId))
+    .innerJoin(revisions, eq(revisions.id, remarks.revisionId))
+    .where(eq(remarks.proposalId, proposalId))
+    .orderBy(asc(remarks.createdAt));
+}

@@ -68,6 +68,11 @@ const acceptGate = (f: ProposalFacts) => [
   ...(f.checksRun && !f.checksPassing && !f.checksWaived ? ["Some checks fail and no curator has waived them."] : []),
 ];
 
+/** What still stands between the proposal and acceptance, whoever asks (shown on the review page). */
+export function acceptanceBlockers(f: ProposalFacts): string[] {
+  return acceptGate(f);
+}
+
 const resubmitGate = (f: ProposalFacts) =>
   f.revisionWhenReturned === null
     ? ["It is not known which revision was sent back, so a new revision cannot be recognised; ask a curator."]

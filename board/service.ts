@@ -10,6 +10,7 @@ import { AppError } from "@/lib/errors";
 import type { AcceptanceCriterionInput } from "@/lib/tb/analysis/acceptance";
 import type { ModelDocument } from "@/lib/tb/document";
 import { loadProposalFacts } from "./facts";
+import { notifyMove, notifyReviewerAssigned, notifyVerdict } from "./notify";
 import { getBoardCard, getFamilyBySlugForUpdate, getLatestRevision, getRelease, getUserRoles, lockProposal } from "./queries";
 import { deriveRevisionFacts, parseDocument } from "./revision-facts";
 import { decideAssignReviewer, decideManageReviewers, decideMove, decideRevise, decideWaiveChecks, type MoveDecision } from "./rules";
@@ -145,13 +146,17 @@ export async function moveProposal(actor: SessionUser, input: MoveInput, opts: {
       before: { stage: proposal.stage },
       after: { stage: input.to, reason: input.reason ?? null, ...(facts.checksWaived && input.to === "accepted" ? { checksWaived: true } : {}) },
     });
-    return { version: proposal.version + 1 };
+    return { version: proposal.version + 1, from: proposal.stage };
   };
-  return opts.tx ? run(opts.tx) : db.transaction(run);
+  if (opts.tx) return run(opts.tx);
+  const result = await db.transaction(run);
+  const latest = await getLatestRevision(db, input.proposalId);
+  await notifyMove(input.proposalId, result.from, input.to, latest?.number ?? 0, input.reason);
+  return { version: result.version };
 }
 
 export async function assignReviewer(actor: SessionUser, input: AssignInput): Promise<{ version: number }> {
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const proposal = await lockFresh(tx, input.proposalId, input.version);
     const facts = await loadProposalFacts(tx, proposal);
     const reviewer = await getUserRoles(tx, input.reviewerId);
@@ -163,6 +168,8 @@ export async function assignReviewer(actor: SessionUser, input: AssignInput): Pr
     await recordAudit(tx, { actorId: actor.id, action: "proposal.reviewer-assigned", subjectType: "proposal", subjectId: proposal.id, after: { reviewerId: reviewer.id } });
     return { version: proposal.version + 1 };
   });
+  await notifyReviewerAssigned(input.proposalId, input.reviewerId, actor.name);
+  return result;
 }
 
 export async function unassignReviewer(actor: SessionUser, input: AssignInput): Promise<{ version: number }> {
@@ -200,7 +207,7 @@ export async function waiveChecks(actor: SessionUser, input: WaiveInput): Promis
 /** An assigned reviewer (never the author) gives a verdict on the latest revision while the proposal is under review. */
 export async function giveVerdict(actor: SessionUser, input: VerdictInput): Promise<{ verdictId: string }> {
   if (!hasAnyRole(actor.roles, ["reviewer"])) throw new AppError("forbidden:role", "Only reviewers give verdicts.");
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const proposal = await lockProposal(tx, input.proposalId);
     if (!proposal) throw new AppError("not-found:proposal", "That proposal does not exist.");
     const facts = await loadProposalFacts(tx, proposal);
@@ -216,4 +223,6 @@ export async function giveVerdict(actor: SessionUser, input: VerdictInput): Prom
     await recordAudit(tx, { actorId: actor.id, action: "proposal.verdict", subjectType: "proposal", subjectId: proposal.id, after: { verdict: input.verdict, revision: latest!.number } });
     return { verdictId: row.id };
   });
+  await notifyVerdict(input.proposalId, actor.name, input.verdict);
+  return result;
 }

@@ -7,11 +7,11 @@ export interface MailMessage {
   html: string;
 }
 
-function escapeHtml(s: string): string {
+export function escapeHtml(s: string): string {
   return s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c] as string);
 }
 
-function layout(paragraphs: string[], link: { href: string; label: string }): string {
+export function mailLayout(paragraphs: string[], link: { href: string; label: string }): string {
   const body = paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`).join("");
   return `<div style="font-family:sans-serif;color:#2b2620;background:#f7f2e8;padding:24px">${body}<p><a href="${escapeHtml(link.href)}" style="color:#a4542a">${escapeHtml(link.label)}</a></p><p style="color:#6b6257;font-size:12px">Bandgate — review and release of tight-binding models</p></div>`;
 }
@@ -26,7 +26,7 @@ export function invitationMail(input: { to: string; name: string; inviterName: s
     to: input.to,
     subject: "You are invited to Bandgate",
     text: `${lines.join("\n\n")}\n\n${input.link}\n`,
-    html: layout(lines, { href: input.link, label: "Set your password" }),
+    html: mailLayout(lines, { href: input.link, label: "Set your password" }),
   };
 }
 
@@ -40,6 +40,6 @@ export function passwordResetMail(input: { to: string; name: string; link: strin
     to: input.to,
     subject: "Reset your Bandgate password",
     text: `${lines.join("\n\n")}\n\n${input.link}\n`,
-    html: layout(lines, { href: input.link, label: "Choose a new password" }),
+    html: mailLayout(lines, { href: input.link, label: "Choose a new password" }),
   };
 }

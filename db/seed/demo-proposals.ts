@@ -1,5 +1,6 @@
 import { eq } from "drizzle-orm";
 import { moveProposal, assignReviewer, createProposal, giveVerdict, saveRevision } from "@/board/service";
+import { notifications } from "@/board/notify";
 import type { Stage } from "@/board/stages";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { documentHash, physicsHash } from "@/lib/tb/canonical";
@@ -120,6 +121,8 @@ async function walkTo(target: Stage, ids: { proposalId: string }, people: Record
 }
 
 export async function seedDemoProposals(families: { id: string; slug: string }[]): Promise<number> {
+  // The demo's people are invented; nobody is told about its workflow steps.
+  notifications.enabled = false;
   const people = {
     author: await person("noor.haddad@meridian.example"),
     curator: await person("akira.sato@meridian.example"),
