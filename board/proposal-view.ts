@@ -19,7 +19,7 @@ export async function getProposalView(proposalId: string, viewer: SessionUser) {
     .leftJoin(releases, eq(releases.id, proposals.baseReleaseId))
     .where(eq(proposals.id, proposalId));
   if (!proposal) return null;
-  const facts: ProposalFacts = await db.transaction((tx) => loadProposalFacts(tx, proposal.p));
+  const { criteria, ...facts }: ProposalFacts & { criteria: unknown[] } = await db.transaction((tx) => loadProposalFacts(tx, proposal.p));
   const [revisionRows, reviewerRows, verdictRows, references, card] = await Promise.all([
     db.select().from(revisions).where(eq(revisions.proposalId, proposalId)).orderBy(desc(revisions.number)),
     db
@@ -57,6 +57,7 @@ export async function getProposalView(proposalId: string, viewer: SessionUser) {
     references,
     card,
     facts,
+    criteria,
     hints: moveHints(viewer, facts) as MoveHint[],
     may: {
       revise: can(decideRevise(viewer, facts)),

@@ -225,3 +225,11 @@ export function listRemarks(proposalId: string) {
     .where(eq(remarks.proposalId, proposalId))
     .orderBy(asc(remarks.createdAt));
 }
+
+export async function getRevisionDocument(proposalId: string, number: number) {
+  const [row] = await db
+    .select({ number: revisions.number, document: revisions.document })
+    .from(revisions)
+    .where(and(eq(revisions.proposalId, proposalId), eq(revisions.number, number)));
+  return row ?? null;
+}
