@@ -1,0 +1,34 @@
+import "server-only";
+import PgBoss from "pg-boss";
+import { serverEnv } from "@/lib/env";
+import { ensureQueues, QUEUES, type ReleaseEventJob } from "./queues";
+
+const cache = globalThis as unknown as { bandgateBoss?: Promise<PgBoss> };
+
+/** A pg-boss instance for sending from the web process (no maintenance or schedules: the worker does those). */
+export function jobQueue(): Promise<PgBoss> {
+  cache.bandgateBoss ??= (async () => {
+    const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, max: 2, supervise: false, schedule: false });
+    boss.on("error", (err) => console.error("[bandgate] job queue", err.message));
+    await boss.start();
+    await ensureQueues(boss);
+    return boss;
+  })().catch((err) => {
+    cache.bandgateBoss = undefined;
+    throw err;
+  });
+  return cache.bandgateBoss;
+}
+
+/**
+ * Hands a committed release event to the worker. The release itself is already committed, so a queue failure must not
+ * undo it: it is logged, and the event row stays as the record of what subscribers were not told.
+ */
+export async function enqueueReleaseEvent(eventId: string): Promise<void> {
+  try {
+    const boss = await jobQueue();
+    await boss.send(QUEUES.releaseEvent, { eventId } satisfies ReleaseEventJob, { id: eventId });
+  } catch (err) {
+    console.error("[bandgate] could not enqueue release event", eventId, err instanceof Error ? err.message : err);
+  }
+}

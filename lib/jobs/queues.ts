@@ -1,0 +1,35 @@
+import type PgBoss from "pg-boss";
+import { jobSettings } from "./settings";
+
+/** Queue names; every process creates them on start (pg-boss 10 needs a queue before its first job). */
+export const QUEUES = {
+  releaseEvent: "release-event",
+  webhookDelivery: "webhook-delivery",
+  registryMail: "registry-mail",
+  rateWindowCleanup: "rate-window-cleanup",
+} as const;
+
+export interface ReleaseEventJob {
+  eventId: string;
+}
+export interface WebhookDeliveryJob {
+  deliveryId: string;
+}
+export interface RegistryMailJob {
+  eventId: string;
+  userId: string;
+}
+
+export async function ensureQueues(boss: PgBoss): Promise<void> {
+  const s = jobSettings();
+  await boss.createQueue(QUEUES.releaseEvent, { name: QUEUES.releaseEvent, retryLimit: 5, retryDelay: 5, retryBackoff: true });
+  await boss.createQueue(QUEUES.webhookDelivery, { name: QUEUES.webhookDelivery, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true });
+  await boss.createQueue(QUEUES.registryMail, { name: QUEUES.registryMail, retryLimit: 5, retryDelay: 30, retryBackoff: true });
+  await boss.createQueue(QUEUES.rateWindowCleanup, { name: QUEUES.rateWindowCleanup, policy: "singleton" });
+}
+
+/** Retry options sent with each webhook job, so a changed setting applies without recreating the queue. */
+export function webhookJobOptions(deliveryId: string): PgBoss.SendOptions {
+  const s = jobSettings();
+  return { id: deliveryId, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true };
+}

@@ -1,0 +1,22 @@
+import { z } from "zod";
+
+/** Job-queue settings, read and validated once; the defaults suit production, tests shorten the retry delay. */
+const schema = z.object({
+  JOBS_POLL_SECONDS: z.coerce.number().min(0.5).max(60).default(1),
+  WEBHOOK_RETRY_LIMIT: z.coerce.number().int().min(0).max(20).default(8),
+  /** Base delay; pg-boss doubles it on each retry (with jitter): 15 s, 30 s, 1 min, … about 1 h by the 8th. */
+  WEBHOOK_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(15),
+  WEBHOOK_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(10_000),
+});
+
+export type JobSettings = z.infer<typeof schema>;
+
+let cached: JobSettings | undefined;
+
+export function jobSettings(): JobSettings {
+  if (cached) return cached;
+  const parsed = schema.safeParse(process.env);
+  if (!parsed.success) throw new Error(`Invalid job settings: ${parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`);
+  cached = parsed.data;
+  return cached;
+}
