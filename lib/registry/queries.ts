@@ -58,18 +58,21 @@ export async function listFamilyVersions(conn: Conn, familyId: string): Promise<
   return (await conn.select({ version: releases.version }).from(releases).where(eq(releases.familyId, familyId))).map((r) => r.version);
 }
 
-/** One release with its document; "latest" means the newest that is neither deprecated nor withdrawn. */
-export async function getReleaseWithDocument(conn: Conn, familyId: string, version: string) {
-  if (version === "latest") {
-    const current = (await listReleasesOfFamily(conn, familyId)).find((r) => !r.deprecatedAt && !r.withdrawnAt);
-    if (!current) return null;
-    version = current.version;
-  }
-  const [row] = await conn
-    .select({ ...releaseColumns, document: releases.document })
-    .from(releases)
-    .where(and(eq(releases.familyId, familyId), eq(releases.version, version)));
+/** One release without its document; "latest" means the newest that is neither deprecated nor withdrawn. */
+export async function getReleaseMeta(conn: Conn, familyId: string, version: string) {
+  if (version === "latest") return (await listReleasesOfFamily(conn, familyId)).find((r) => !r.deprecatedAt && !r.withdrawnAt) ?? null;
+  const [row] = await conn.select(releaseColumns).from(releases).where(and(eq(releases.familyId, familyId), eq(releases.version, version)));
   return row ?? null;
+}
+
+export async function getReleaseDocument(conn: Conn, releaseId: string): Promise<unknown> {
+  const [row] = await conn.select({ document: releases.document }).from(releases).where(eq(releases.id, releaseId));
+  return row?.document ?? null;
+}
+
+export async function getReleaseWithDocument(conn: Conn, familyId: string, version: string) {
+  const meta = await getReleaseMeta(conn, familyId, version);
+  return meta ? { ...meta, document: await getReleaseDocument(conn, meta.id) } : null;
 }
 
 export async function getReleaseById(conn: Conn, id: string) {
