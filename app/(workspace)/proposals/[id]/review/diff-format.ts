@@ -4,16 +4,21 @@
  */
 const MINUS = "−";
 
+/** Fixed decimals with a true minus sign; a non-zero value that would round to zero says "<0.0001" and keeps its sign. */
 export function formatFixed(value: number, digits: number, signed = false): string {
   const text = Math.abs(value).toFixed(digits);
-  const zero = Number(text) === 0;
-  const sign = value < 0 && !zero ? MINUS : signed && !zero ? "+" : signed ? "±" : "";
-  return `${sign}${text}`;
+  const sign = value < 0 ? MINUS : signed && value > 0 ? "+" : "";
+  if (value !== 0 && Number(text) === 0) return `${sign}<${(10 ** -digits).toFixed(digits)}`;
+  return `${Number(text) === 0 ? "" : sign}${text}`;
 }
 
-/** |ΔE| in eV with four decimals; a non-zero value below the last digit says so instead of printing zero. */
+/** |ΔE| in eV. */
 export function formatEnergy(value: number): string {
-  return value !== 0 && Math.abs(value) < 5e-5 ? "<0.0001" : formatFixed(value, 4);
+  return formatFixed(value, 4);
+}
+
+export function formatPercent(value: number): string {
+  return `${formatFixed(value, 1, true)} %`;
 }
 
 export interface HeatScale {

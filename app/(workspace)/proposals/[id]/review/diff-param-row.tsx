@@ -1,5 +1,5 @@
 import type { ParamDiffRow } from "@/lib/review/param-diff";
-import { ENERGY_HEAT, formatEnergy, formatFixed, heatBackground, heatLevel, PERCENT_HEAT, type HeatScale } from "./diff-format";
+import { ENERGY_HEAT, formatEnergy, formatFixed, formatPercent, heatBackground, heatLevel, PERCENT_HEAT, type HeatScale } from "./diff-format";
 
 const cell = "num whitespace-nowrap px-3 py-1.5 text-right align-top";
 
@@ -60,7 +60,7 @@ export function ParamDiffRowView({ row, remarkHref }: { row: ParamDiffRow; remar
           —
         </td>
       ) : (
-        <HeatCell value={row.percent} scale={PERCENT_HEAT} text={`${formatFixed(row.percent, 1, true)} %`} />
+        <HeatCell value={row.percent} scale={PERCENT_HEAT} text={formatPercent(row.percent)} />
       )}
       <EffectCell row={row} />
     </tr>
