@@ -39,11 +39,13 @@ export interface ParameterDiff {
 
 export interface ParameterDiffOptions {
   window?: [number, number];
-  /** k-points along the base document's default path (default: the path's own count). */
+  /** k-points along the base document's default path (default 120: a smooth max |ΔE| needs no finer sampling). */
   kPoints?: number;
   /** Rows (largest first) whose effect is recomputed exactly; the rest keep the first-order estimate. */
   exactRows?: number;
 }
+
+const DEFAULT_EFFECT_POINTS = 120;
 
 export function buildParameterDiff(base: ModelDocument | null, proposed: ModelDocument, opts: ParameterDiffOptions = {}): ParameterDiff {
   const window = opts.window ?? proposed.validity.energyWindow ?? base?.validity.energyWindow ?? null;
@@ -66,7 +68,7 @@ export function buildParameterDiff(base: ModelDocument | null, proposed: ModelDo
   }
   // A removed hopping can share its list-index key with a different hopping of the proposal.
   for (const old of before.values()) if (!old.implicit) rows.push(row(proposedKeys.has(old.key) ? `${old.key}@base` : old.key, old, old.value, null));
-  const kFrac = samplePath(base, opts.kPoints).kFrac;
+  const kFrac = samplePath(base, opts.kPoints ?? DEFAULT_EFFECT_POINTS).kFrac;
   const effects = estimateChangeEffects(base, valueChanges, kFrac, window ?? [-Infinity, Infinity], {
     ...DEFAULT_EFFECT_OPTIONS,
     ...(opts.exactRows !== undefined ? { exactRows: opts.exactRows } : {}),
