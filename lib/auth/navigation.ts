@@ -14,9 +14,11 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/", label: "Overview", roles: [] },
   { href: "/board", label: "Review board", roles: BOARD_ROLES },
   { href: "/families", label: "Model families", roles: [] },
+  { href: "/registry", label: "Registry", roles: [] },
   { href: "/admin/people", label: "People", roles: ["admin"] },
   { href: "/admin/mailbox", label: "Mail catcher", roles: ["admin"] },
   { href: "/admin/audit", label: "Audit trail", roles: ["admin", "curator"] },
+  { href: "/settings/tokens", label: "API tokens", roles: [] },
   { href: "/account", label: "Account", roles: [] },
 ];
 

@@ -4,11 +4,11 @@ import { AppShell } from "./pages/app-shell";
 import { SignInPage } from "./pages/sign-in-page";
 
 const expectedNav: Record<keyof typeof E2E_PEOPLE, string[]> = {
-  author: ["Overview", "Review board", "Model families", "Account"],
-  reviewer: ["Overview", "Review board", "Model families", "Account"],
-  curator: ["Overview", "Review board", "Model families", "Audit trail", "Account"],
-  consumer: ["Overview", "Model families", "Account"],
-  admin: ["Overview", "Review board", "Model families", "People", "Mail catcher", "Audit trail", "Account"],
+  author: ["Overview", "Review board", "Model families", "Registry", "API tokens", "Account"],
+  reviewer: ["Overview", "Review board", "Model families", "Registry", "API tokens", "Account"],
+  curator: ["Overview", "Review board", "Model families", "Registry", "Audit trail", "API tokens", "Account"],
+  consumer: ["Overview", "Model families", "Registry", "API tokens", "Account"],
+  admin: ["Overview", "Review board", "Model families", "Registry", "People", "Mail catcher", "Audit trail", "API tokens", "Account"],
 };
 
 for (const [role, person] of Object.entries(E2E_PEOPLE) as [keyof typeof E2E_PEOPLE, { email: string; name: string }][]) {

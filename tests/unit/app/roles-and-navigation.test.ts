@@ -32,8 +32,8 @@ describe("navigation by role", () => {
     expect(hrefs(["curator"])).toContain("/admin/audit");
     expect(hrefs(["author"])).not.toContain("/admin/audit");
   });
-  it("gives everyone the overview and their account", () => {
-    expect(hrefs([])).toEqual(["/", "/families", "/account"]);
+  it("gives everyone the overview, the registry, API tokens and their account", () => {
+    expect(hrefs([])).toEqual(["/", "/families", "/registry", "/settings/tokens", "/account"]);
   });
   it("shows the review board to those who take part in review, not to consumers", () => {
     for (const role of ["author", "reviewer", "curator", "admin"] as const) expect(hrefs([role])).toContain("/board");

@@ -90,6 +90,11 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
               <dt>Checks</dt>
               <dd>{view.facts.checksPassing ? "✓ pass" : view.facts.checksWaived ? "≈ waived" : "✕ fail"}</dd>
             </dl>
+            {proposal.stage === "accepted" && may.curate ? (
+              <Link href={`/registry/${view.familySlug}/release/${proposal.id}`} className="mt-3 inline-block rounded-md bg-copper px-4 py-2 font-semibold text-white hover:bg-copper-deep">
+                Release this proposal…
+              </Link>
+            ) : null}
           </Section>
         </aside>
         <aside className="space-y-8">
