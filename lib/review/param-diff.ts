@@ -78,7 +78,11 @@ export function buildParameterDiff(base: ModelDocument | null, proposed: ModelDo
     if (e) Object.assign(c.row, { effect: e.effect, effectMethod: e.method });
   }
   const structural = listStructuralChanges(base, proposed);
-  return { rows: sortParamRows(rows, "effect"), structural, gauge: judgeGauge(base, proposed), window };
+  const reordered = rows.length === 0 && structural.length === 0 && base.conventions.blochPhase === proposed.conventions.blochPhase;
+  const gauge = reordered
+    ? { verdict: "identical" as const, explanation: "no parameter changed; sites, shells or hoppings are only listed in another order" }
+    : judgeGauge(base, proposed);
+  return { rows: sortParamRows(rows, "effect"), structural, gauge, window };
 }
 
 function row(key: string, p: MeaningfulParameter, base: number | null, proposed: number | null): ParamDiffRow {

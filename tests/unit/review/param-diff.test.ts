@@ -43,9 +43,14 @@ describe("keyed parameter diff: values", () => {
     expect(buildParameterDiff(base, base).rows).toEqual([]);
   });
 
-  it("reports an identical document as identical", () => {
+  it("reports an identical document as identical, also when only the order of sites or hoppings differs", () => {
     const doc = zincBlendeDocument();
     expect(buildParameterDiff(doc, structuredClone(doc)).gauge.verdict).toBe("identical");
+    // Reordering the basis permutes H(k) by a permutation matrix: same eigenvalues (a unitary similarity).
+    const reordered = edit(doc, (d) => d.sites.reverse());
+    const diff = buildParameterDiff(doc, reordered);
+    expect(diff).toMatchObject({ rows: [], structural: [] });
+    expect(diff.gauge.verdict).toBe("identical");
   });
 });
 
