@@ -28,6 +28,9 @@ if [ -z "${SMTP_HOST:-}" ]; then
   wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; exit 1; }
 fi
 
+log "starting the background worker (webhook deliveries, registry e-mail)"
+start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
+
 if [ "$DEV" -eq 1 ]; then
   start_child node_modules/.bin/next dev -p "$PORT"
 else

@@ -24,6 +24,9 @@ npx tsx db/migrate.ts
 start_child node_modules/.bin/tsx mail/fake-smtp-main.ts
 wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; exit 1; }
 build_if_needed
+# Deliveries retry after about 1–2 s here (15 s and doubling in production), so the retry test stays short.
+export WEBHOOK_RETRY_DELAY_SECONDS=1
+start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
 
 status=0
 log "type check (tsc)"; npx tsc --noEmit -p tsconfig.json || status=1
