@@ -32,3 +32,10 @@ export async function enqueueReleaseEvent(eventId: string): Promise<void> {
     console.error("[bandgate] could not enqueue release event", eventId, err instanceof Error ? err.message : err);
   }
 }
+
+/** Stops the sending instance (scripts and tests that exit). */
+export async function stopJobQueue(): Promise<void> {
+  const pending = cache.bandgateBoss;
+  cache.bandgateBoss = undefined;
+  if (pending) await (await pending).stop({ graceful: false, wait: true });
+}

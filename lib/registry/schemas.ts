@@ -18,7 +18,7 @@ export const deprecateInput = z.object({
   reason: reason("it is deprecated"),
   successorVersion: z.string().trim().max(40).optional().transform((v) => (v ? v : undefined)),
 });
-export type DeprecateInput = z.infer<typeof deprecateInput>;
+export type DeprecateInput = Omit<z.infer<typeof deprecateInput>, "successorVersion"> & { successorVersion?: string };
 
 export const withdrawInput = z.object({ ...releaseRef, reason: reason("it is withdrawn") });
 export type WithdrawInput = z.infer<typeof withdrawInput>;
