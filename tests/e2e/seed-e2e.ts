@@ -63,4 +63,6 @@ async function proposalAt(title: string, stage: "draft" | "submitted" | "under_r
 }
 
 for (const p of E2E_PROPOSALS) await proposalAt(p.title, p.stage);
+const { seedRegistryE2E } = await import("./pages/registry-fixture");
+await seedRegistryE2E(people, base);
 await closeDb();
