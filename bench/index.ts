@@ -1,4 +1,5 @@
 import { closeDb } from "@/db/client";
+import { runApiBench } from "./api";
 import { runBandsBench } from "./bands";
 import { runBoardBench } from "./board";
 import { runEigenBench } from "./eigen";
@@ -9,4 +10,6 @@ console.log("");
 await runBandsBench();
 console.log("");
 await runBoardBench();
+console.log("");
+await runApiBench();
 await closeDb();
