@@ -1,4 +1,5 @@
 import { filledBands, valenceMaximum } from "./band-edges";
+import { formatNumber } from "./band-format";
 import type { BandViewData, BandViewReference } from "./band-view";
 
 /**
@@ -71,14 +72,17 @@ function shiftFor(view: BandViewData, alignment: Alignment, window: Window) {
   };
 }
 
-const signed = (v: number) => `${v >= 0 ? "+" : "−"}${Math.abs(v).toFixed(3)} eV`;
+const signed = (v: number) => {
+  const text = formatNumber(v, 3);
+  return `${v > 0 && /[1-9]/.test(text) ? "+" : ""}${text} eV`;
+};
 
 function describe(alignment: Alignment, window: Window, named: { name: string; shift: number | null }[]): string {
   if (alignment === "none") return "Energies as computed: no series is shifted.";
   const target = {
     vbm: "so that their valence-band maxima meet the proposed revision's",
     fermi: "so that their Fermi levels meet the proposed revision's",
-    "least-squares": `by the mean difference to the proposed revision ${window ? `over ${window[0]} to ${window[1]} eV` : "over all energies"}`,
+    "least-squares": `by the mean difference to the proposed revision ${window ? `over ${formatNumber(window[0], 2)} to ${formatNumber(window[1], 2)} eV` : "over all energies"}`,
   }[alignment];
   if (named.length === 0) return `Nothing to align: only the proposed revision is shown (alignment ${target}).`;
   const parts = named.map((s) => `${s.name} ${s.shift === null ? "not shifted (cannot be aligned this way)" : signed(s.shift)}`);

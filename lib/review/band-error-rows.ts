@@ -1,6 +1,7 @@
 import type { ReferenceComparison } from "@/lib/tb/analysis/compare-reference";
 import { ALIGNMENT_LABEL } from "./alignment";
 import { filledBands } from "./band-edges";
+import { formatNumber } from "./band-format";
 import { numberRow, textRow, type MetricsReference, type MetricsRow, type MetricsSide } from "./band-rows";
 import type { MetricsOptions } from "./metrics";
 
@@ -33,7 +34,7 @@ export function errorRows(b: MetricsSide | null, p: MetricsSide, ref: MetricsRef
   const [ob, op] = [b ? compare(b, ref, opts) : null, compare(p, ref, opts)];
   const cb = ob?.ok ? ob.cmp : null;
   const cp = op.ok ? op.cmp : null;
-  const scope = `${opts.window ? `${opts.window[0]} to ${opts.window[1]} eV` : "all energies"}, ${ALIGNMENT_LABEL[opts.alignment]}`;
+  const scope = `${opts.window ? `${formatNumber(opts.window[0], 2)} to ${formatNumber(opts.window[1], 2)} eV` : "all energies"}, ${ALIGNMENT_LABEL[opts.alignment]}`;
   const rows: MetricsRow[] = [];
   const failed = (o: Outcome | null) => (o && !o.ok ? `not compared: ${o.reason}` : undefined);
   if (!cp || (ob && !cb)) rows.push(textRow("reference-compare", `Comparison with ${ref.name}`, { base: failed(ob), proposed: failed(op) }));

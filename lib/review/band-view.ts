@@ -33,7 +33,7 @@ export interface BandViewData {
   proposedFermi: number | null;
   baseVbm: number | null;
   proposedVbm: number | null;
-  /** States/eV per cell on one energy grid for both documents. */
+  /** States/eV per cell on one energy grid for both documents (Gaussian broadening DOS_SIGMA). */
   dos: { energy: number[]; base: number[] | null; proposed: number[] };
   electronCount: number;
   spinDegeneracy: 1 | 2;
@@ -45,9 +45,14 @@ export interface ReferenceInput {
   parsed: ParsedReferenceBands & { pointsTotal?: number };
 }
 
-/** About 3000 mesh points: the DOS and Fermi level settle to a few meV for the demo models at that size. */
+/** About 3000 mesh points: the Fermi level settles to a few meV for the demo models at that size. */
 const MESH_POINTS = 3000;
 const DOS_POINTS = 401;
+/**
+ * Display broadening of the DOS, eV: wider than the Fermi-level smearing (0.05 eV) because a mesh of this size
+ * leaves sampling ripples at 0.05 eV; the plot is for shape, the numbers come from the bands.
+ */
+const DOS_SIGMA = 0.12;
 
 const rows = (e: Float64Array[]) => e.map((r) => Array.from(r));
 
@@ -96,7 +101,7 @@ export function buildBandView(proposed: ModelDocument, base: ModelDocument | nul
   let lo = Infinity;
   let hi = -Infinity;
   for (const m of [mesh, baseMesh]) for (const row of m?.levels ?? []) (lo = Math.min(lo, row[0])), (hi = Math.max(hi, row[row.length - 1]));
-  const range = { energyMin: lo - 0.5, energyMax: hi + 0.5, points: DOS_POINTS };
+  const range = { energyMin: lo - 0.5, energyMax: hi + 0.5, points: DOS_POINTS, sigma: DOS_SIGMA };
   const dos = computeDos(mesh.levels, range, mesh.weights);
   const baseDos = baseMesh ? computeDos(baseMesh.levels, range, baseMesh.weights) : null;
 

@@ -13,10 +13,18 @@ function groupOf(key: string): string {
 }
 
 const CELL = "px-3 py-1.5";
+/** Rows where proposed − base means nothing: bookkeeping of the reference comparison. */
+const NO_DELTA = new Set(["points", "shift"]);
 const NUM = `num whitespace-nowrap text-right ${CELL}`;
 
 function Value({ text, numeric }: { text: string; numeric: boolean }) {
-  return <td className={numeric ? NUM : `${CELL} text-sm`}>{text}</td>;
+  return <td className={numeric ? NUM : `${CELL} text-right`}>{text}</td>;
+}
+
+function deltaText(delta: number | null, digits: number): string {
+  if (delta === null) return "";
+  const text = formatNumber(delta, digits);
+  return delta > 0 && /[1-9]/.test(text) ? `+${text}` : text;
 }
 
 /** Base vs proposed vs reference, grouped; Δ = proposed − base for numeric rows. */
@@ -44,14 +52,14 @@ export function MetricsTable({ rows }: { rows: MetricsRow[] }) {
         {groups.map((g) => (
           <tbody key={g.title} className="divide-y divide-rule/60">
             <tr className="bg-paper-deep/60">
-              <th scope="rowgroup" colSpan={6} className={`${CELL} text-left text-xs font-semibold uppercase tracking-wider text-ink-soft`}>
+              <th scope="rowgroup" colSpan={6} className={`${CELL} text-left text-xs font-semibold text-ink-soft`}>
                 {g.title}
               </th>
             </tr>
             {g.rows.map((r) => {
               const numeric = r.unit !== "" || r.key === "points";
               const { base, proposed } = r.values;
-              const delta = numeric && base !== null && proposed !== null ? proposed - base : null;
+              const delta = numeric && !NO_DELTA.has(r.key) && base !== null && proposed !== null ? proposed - base : null;
               return (
                 <tr key={r.key} id={`metric-${r.key}`}>
                   <th scope="row" className={`${CELL} text-left font-normal`}>
@@ -59,7 +67,7 @@ export function MetricsTable({ rows }: { rows: MetricsRow[] }) {
                   </th>
                   <Value text={r.base} numeric={numeric} />
                   <Value text={r.proposed} numeric={numeric} />
-                  <td className={NUM}>{delta === null ? "" : `${delta > 0 ? "+" : ""}${formatNumber(delta, r.key === "points" ? 0 : 3)}`}</td>
+                  <td className={NUM}>{deltaText(delta, r.key === "points" ? 0 : 3)}</td>
                   <Value text={r.reference} numeric={numeric} />
                   <td className={`${CELL} text-xs text-ink-soft`}>{r.unit}</td>
                 </tr>
