@@ -7,7 +7,7 @@ import { expect, test } from "@playwright/test";
 import { E2E_PASSWORD, E2E_PEOPLE } from "./fixtures/people";
 import { AppShell } from "./pages/app-shell";
 import { BoardPage } from "./pages/board-page";
-import { E2E_REGISTRY } from "./pages/registry-fixture";
+import { E2E_REGISTRY } from "./pages/registry-names";
 import { ReleaseFormPage, ReleasePage, TokensPage } from "./pages/registry-pages";
 import { SignInPage } from "./pages/sign-in-page";
 

@@ -6,12 +6,11 @@ import type { Role } from "@/lib/auth/roles";
 import { documentHash, physicsHash } from "@/lib/tb/canonical";
 import type { ModelDocument } from "@/lib/tb/document";
 import { setParameters } from "@/lib/tb/parameters";
-
-/** The registry's browser-test data: a family needing one accept, with release 1.0.0 and an accepted proposal. */
-export const E2E_REGISTRY = { slug: "e2e-registry", title: "E2E registry chain", proposal: "E2E release candidate" };
+import { E2E_REGISTRY } from "./registry-names";
 
 type Person = { id: string; email: string; name: string; roles: Role[] };
 
+/** The registry's browser-test data: a family needing one accept, with release 1.0.0 and an accepted proposal. */
 export async function seedRegistryE2E(people: Record<string, Person>, base: ModelDocument): Promise<void> {
   const [existing] = await db.select({ id: modelFamilies.id }).from(modelFamilies).where(eq(modelFamilies.slug, E2E_REGISTRY.slug));
   if (existing) return;
