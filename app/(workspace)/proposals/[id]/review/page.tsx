@@ -1,0 +1,138 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Markdown } from "@/app/_components/markdown";
+import { SafetyNote } from "@/app/_components/safety-note";
+import { getProposalView } from "@/board/proposal-view";
+import { getRevisionDocument, listRemarks } from "@/board/queries";
+import { anchorFromQuery, mayFlagBlocking, mayWriteRemark } from "@/board/remark-rules";
+import { acceptanceBlockers } from "@/board/rules";
+import { STAGE_META } from "@/board/stages";
+import { requirePageUser } from "@/lib/auth/guard";
+import { BOARD_ROLES } from "@/lib/auth/navigation";
+import { validityText } from "@/lib/families/view";
+import type { ParsedReferenceBands } from "@/lib/reference-bands";
+import { buildBandView } from "@/lib/review/band-view";
+import { proposalSlug } from "@/lib/review/export-names";
+import { buildMetrics } from "@/lib/review/metrics";
+import { buildParameterDiff } from "@/lib/review/param-diff";
+import { canonicalJson } from "@/lib/tb/canonical";
+import { Section } from "../section";
+import { StagePanel } from "../stage-panel";
+import { BandPanel } from "./band-panel";
+import { ChecksGatePanel } from "./checks-gate-panel";
+import { MetricsTable } from "./metrics-table";
+import { ParameterDiffPanel } from "./parameter-diff-panel";
+import { RemarksPanel } from "./remarks-panel";
+import { parseSide, resolveSide } from "./revision-choice";
+import { RevisionPairPicker } from "./revision-pair-picker";
+import { TextDiffPanel } from "./text-diff-panel";
+import { VerdictsPanel } from "./verdicts-panel";
+
+export const metadata: Metadata = { title: "Review workspace" };
+export const dynamic = "force-dynamic";
+
+type Search = Promise<{ from?: string; to?: string; remark?: string }>;
+
+export default async function ReviewPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Search }) {
+  const { id } = await params;
+  const search = await searchParams;
+  const user = await requirePageUser(`/proposals/${id}/review`, [...BOARD_ROLES]);
+  const view = /^[0-9a-f-]{36}$/i.test(id) ? await getProposalView(id, user) : null;
+  if (!view || !view.latest || !view.latestDocument) notFound();
+  const { proposal, latest, latestDocument, baseDocument } = view;
+  const base = `/proposals/${id}/review`;
+
+  const from = await resolveSide(parseSide(search.from, baseDocument ? "base" : `r${Math.max(1, latest.number - 1)}`), baseDocument, view.baseVersion, (n) => getRevisionDocument(id, n));
+  const to = await resolveSide(parseSide(search.to, `r${latest.number}`), baseDocument, view.baseVersion, (n) => getRevisionDocument(id, n));
+  const window = latestDocument.validity.energyWindow ?? null;
+  const diff = to.doc ? buildParameterDiff(from.doc, to.doc, { window: window ?? undefined }) : null;
+  const references = view.references.map((r) => ({ id: r.id, name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } }));
+  const bandView = buildBandView(latestDocument, baseDocument, references);
+  const metrics = buildMetrics(latestDocument, baseDocument, references[0] ?? null, { window, alignment: "vbm" });
+  const remarks = await listRemarks(id);
+  const ctx = { authorId: proposal.authorId, assignedReviewerIds: view.facts.assignedReviewerIds, familyCuratorIds: view.facts.familyCuratorIds };
+  const options = [
+    ...(baseDocument ? [{ value: "base", label: `base release ${view.baseVersion}` }] : []),
+    ...view.revisions.map((r) => ({ value: `r${r.number}`, label: `revision ${r.number}${r.note ? ` — ${r.note}` : ""}` })),
+  ];
+  const meta = STAGE_META[proposal.stage];
+
+  return (
+    <>
+      <Link href={`/proposals/${id}`} className="text-sm text-copper-deep underline">
+        ← Proposal overview
+      </Link>
+      <header className="mb-6 mt-2">
+        <div className="num text-xs text-ink-soft">
+          {view.familyTitle} · base {view.baseVersion ?? "none"} → revision {latest.number}
+        </div>
+        <h1 className="text-2xl font-semibold tracking-tight">Review: {proposal.title}</h1>
+        <p className="mt-1 text-sm">
+          <span className="rounded bg-paper-deep px-2 py-0.5 font-semibold" data-testid="proposal-stage">
+            {meta.glyph} {meta.label}
+          </span>{" "}
+          <span className="text-ink-soft">by {view.authorName}</span>
+        </p>
+      </header>
+
+      <div className="grid gap-8 xl:grid-cols-[1fr_24rem]">
+        <div className="min-w-0 space-y-10">
+          {proposal.rationale ? (
+            <Section title="Rationale">
+              <Markdown text={proposal.rationale} />
+            </Section>
+          ) : null}
+          <Section title="What changed">
+            <RevisionPairPicker options={options} from={from.value} to={to.value} />
+            {diff ? <ParameterDiffPanel diff={diff} remarkBase={base} /> : <p className="text-sm text-ink-soft">That revision is not a valid document.</p>}
+            <details className="mt-4">
+              <summary className="cursor-pointer text-sm font-semibold">Canonical document, line by line</summary>
+              <div className="mt-2">
+                <TextDiffPanel
+                  before={from.doc ? canonicalJson(from.doc, { pretty: true }) : ""}
+                  after={to.doc ? canonicalJson(to.doc, { pretty: true }) : ""}
+                  beforeLabel={from.label}
+                  afterLabel={to.label}
+                />
+              </div>
+            </details>
+          </Section>
+          <Section title="What it does to the bands">
+            <BandPanel data={bandView} remarkBase={base} initialWindow={window} slug={proposalSlug(proposal.title)} />
+            <div className="mt-6">
+              <MetricsTable rows={metrics} />
+            </div>
+          </Section>
+          <Section title={`Checks and gate (revision ${latest.number})`}>
+            <ChecksGatePanel checks={latest.checkResults} criteria={view.criteria} waivedReason={latest.checksWaivedReason} gateReasons={acceptanceBlockers(view.facts)} />
+          </Section>
+          <SafetyNote validity={validityText(latestDocument)} />
+        </div>
+        <aside className="space-y-8">
+          <Section title="Stage">
+            <StagePanel proposalId={proposal.id} version={proposal.version} hints={view.hints} />
+          </Section>
+          <Section title="Verdicts">
+            <VerdictsPanel proposalId={proposal.id} verdicts={view.verdicts} required={view.facts.requiredAccepts} fresh={view.facts.freshAccepts} mayGive={view.may.giveVerdict} />
+          </Section>
+          <div id="remarks">
+            <Section title="Remarks">
+              <RemarksPanel
+                proposalId={proposal.id}
+                remarks={remarks}
+                viewer={user}
+                ctx={ctx}
+                latestRevision={latest.number}
+                mayWrite={mayWriteRemark(user, ctx)}
+                mayBlock={mayFlagBlocking(user, ctx)}
+                anchorForNew={anchorFromQuery(search.remark)}
+                clearAnchorHref={`${base}#remarks`}
+              />
+            </Section>
+          </div>
+        </aside>
+      </div>
+    </>
+  );
+}
