@@ -7,7 +7,7 @@ import { familyCurators, modelFamilies, proposals, releases, users } from "@/db/
 import { documentHash, physicsHash } from "@/lib/tb/canonical";
 import { parseModelDocument, type ModelDocument } from "@/lib/tb/document";
 import { setParameters } from "@/lib/tb/parameters";
-import { E2E_FAMILY, E2E_PASSWORD, E2E_PEOPLE, E2E_PROPOSALS } from "./fixtures/people";
+import { E2E_FAMILY, E2E_PASSWORD, E2E_PEOPLE, E2E_PROPOSALS, E2E_SECOND_REVIEWER } from "./fixtures/people";
 
 /**
  * Test data for the browser tests (never the demo data): one account per role, one family with a release, and
@@ -18,7 +18,7 @@ if (!/_test(\?|$)/.test(url)) throw new Error("End-to-end tests need DATABASE_UR
 
 const hash = await bcrypt.hash(E2E_PASSWORD, 10);
 const people: Record<string, { id: string; email: string; name: string; roles: ("author" | "reviewer" | "curator" | "consumer" | "admin")[] }> = {};
-for (const [key, p] of Object.entries(E2E_PEOPLE)) {
+for (const [key, p] of [...Object.entries(E2E_PEOPLE), ["reviewer2", E2E_SECOND_REVIEWER] as const]) {
   const [row] = await db
     .insert(users)
     .values({ email: p.email, name: p.name, roles: p.roles, passwordHash: hash })
@@ -50,7 +50,7 @@ async function version(id: string) {
   return row.version;
 }
 
-async function proposalAt(title: string, stage: "draft" | "submitted" | "under_review") {
+async function proposalAt(title: string, stage: "draft" | "submitted" | "under_review", reviewers = 1) {
   const { proposalId } = await createProposal(people.author, { familySlug: family.slug, baseReleaseId: release.id, title, rationale: "Test fixture." });
   const doc = setParameters(base, { "shell/A-A/1/sp_sigma": 1.9 });
   doc.provenance.citations["shell/A-A/1/sp_sigma"] = "test fixture change";
@@ -58,11 +58,12 @@ async function proposalAt(title: string, stage: "draft" | "submitted" | "under_r
   if (stage === "draft") return;
   await moveProposal(people.author, { proposalId, version: await version(proposalId), to: "submitted" });
   await assignReviewer(people.curator, { proposalId, version: await version(proposalId), reviewerId: people.reviewer.id });
+  if (reviewers > 1) await assignReviewer(people.curator, { proposalId, version: await version(proposalId), reviewerId: people.reviewer2.id });
   if (stage === "submitted") return;
   await moveProposal(people.curator, { proposalId, version: await version(proposalId), to: "under_review" });
 }
 
-for (const p of E2E_PROPOSALS) await proposalAt(p.title, p.stage);
+for (const p of E2E_PROPOSALS) await proposalAt(p.title, p.stage, "reviewers" in p ? p.reviewers : 1);
 const { seedRegistryE2E } = await import("./pages/registry-fixture");
 await seedRegistryE2E(people, base);
 await closeDb();
