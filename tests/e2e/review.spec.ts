@@ -8,7 +8,7 @@ test("a blocking remark with math and a major revision hold the gate until the a
   test.setTimeout(180_000);
   // Reviewer: bands, diff, a blocking remark with inline and display math, a major revision.
   const reviewer = new ReviewPage(await openReviewAs(browser, E2E_PEOPLE.reviewer.email, TITLE));
-  await expect(reviewer.page.getByRole("img", { name: /Bands/ }).first()).toBeVisible();
+  await expect(reviewer.page.getByRole("img", { name: /Band structure along/ })).toBeVisible();
   await expect(reviewer.page.locator("#param-shell\\/A-A\\/1\\/sp_sigma")).toBeVisible();
   await reviewer.writeRemark("Why does $E_g$ move here?\n\n$$\n\\Delta E \\approx \\frac{\\partial E}{\\partial p}\\,\\Delta p\n$$\n", true);
   const remark = reviewer.remark("Why does");
