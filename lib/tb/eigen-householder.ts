@@ -6,7 +6,7 @@ import type { HermitianScratch } from "./eigen-workspace";
  * Method: Householder reflectors P = I − v vᴴ / h applied from the last row upwards on the lower triangle,
  * then a diagonal unitary phase D that makes the sub-diagonal real and non-negative.
  * Sources: Wilkinson & Reinsch, Handbook for Automatic Computation vol. II (1971), contributions II/2 (tred2)
- * and the complex variants htridi/htribk of EISPACK (Smith et al., Lecture Notes in Computer Science 6, 1976);
+ * and the complex variants htridi/htribk of EISPACK (Smith et al., Springer LNCS vol. 6, 1976);
  * Golub & Van Loan, "Matrix Computations", 4th ed. (2013), §5.1 and §8.3.1.
  * Each step's rank-2 update B − v qᴴ − q vᴴ is deferred and fused with the next step's product B v′, so the
  * shrinking lower triangle is read and written once per step instead of twice (Dongarra, Hammarling &
