@@ -93,8 +93,8 @@ export async function runApiBench(): Promise<void> {
     const auth = { authorization: `Bearer ${token}` };
     const cases = [
       { label: "static route (prerendered)", path: "/api/v1/openapi.json", headers: {}, status: 200 },
-      { label: "document, no ETag     ", path, headers: auth, status: 200 },
-      { label: "document, valid ETag  ", path, headers: { ...auth, "if-none-match": `"${sha256}"` }, status: 304 },
+      { label: "document, no ETag", path, headers: auth, status: 200 },
+      { label: "document, valid ETag", path, headers: { ...auth, "if-none-match": `"${sha256}"` }, status: 304 },
     ];
     for (const c of cases) await load(port, c.path, c.headers, c.status, 1);
     const results = [];
@@ -102,7 +102,7 @@ export async function runApiBench(): Promise<void> {
     const ref = results[0];
     console.log(`API v1 on loopback: ${CONNECTIONS} keep-alive connections, ${SECONDS} s each, one next start (requests/s, p99 ms; ratio against the static route)`);
     for (const r of results) {
-      console.log(`  ${r.label}  ${r.rps.toFixed(0).padStart(6)} req/s  ${(r.rps / ref.rps).toFixed(2)}×   p99 ${r.p99.toFixed(1).padStart(6)} ms  ${(r.p99 / ref.p99).toFixed(1)}×`);
+      console.log(`  ${r.label.padEnd(28)}${r.rps.toFixed(0).padStart(6)} req/s  ${(r.rps / ref.rps).toFixed(2)}×   p99 ${r.p99.toFixed(1).padStart(6)} ms  ${(r.p99 / ref.p99).toFixed(1)}×`);
     }
   } finally {
     if (server.pid) process.kill(-server.pid, "SIGTERM");
