@@ -7,7 +7,7 @@ import { SafetyNote } from "@/app/_components/safety-note";
 import { compareBandsOnPath } from "@/board/band-comparison";
 import { getProposalView } from "@/board/proposal-view";
 import { listReviewers } from "@/board/queries";
-import { STAGE_META, VERDICT_LABEL } from "@/board/stages";
+import { VERDICT_LABEL } from "@/board/stages";
 import { changedParameters } from "@/board/submission";
 import type { ParsedReferenceBands } from "@/lib/reference-bands";
 import { requirePageUser } from "@/lib/auth/guard";
@@ -18,6 +18,7 @@ import { ParameterChanges } from "./parameter-changes";
 import { ReferenceUploadForm } from "./reference-upload-form";
 import { RevisionEditor } from "./revision-editor";
 import { ReviewersPanel } from "./reviewers-panel";
+import { ProposalHeading } from "./proposal-heading";
 import { Section } from "./section";
 import { StagePanel } from "./stage-panel";
 import { VerdictForm } from "./verdict-form";
@@ -43,32 +44,16 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
         ...comparison.references.map((r) => ({ role: "reference" as const, label: `reference: ${r.name}`, energies: r.energies, distance: r.distance })),
       ]
     : [];
-  const meta = STAGE_META[proposal.stage];
   return (
     <>
       <Link href="/board" className="text-sm text-copper-deep underline">
         ← Review board
       </Link>
-      <header className="mb-6 mt-2">
-        <div className="num text-xs text-ink-soft">
-          <Link href={`/families/${view.familySlug}`} className="hover:underline">
-            {view.familyTitle}
-          </Link>{" "}
-          · base {view.baseVersion ?? "none (new model)"} → revision {latest?.number ?? 0}
-        </div>
-        <h1 className="text-2xl font-semibold tracking-tight">{proposal.title}</h1>
-        <p className="mt-1 text-sm">
-          <span className="rounded bg-paper-deep px-2 py-0.5 font-semibold" data-testid="proposal-stage">
-            {meta.glyph} {meta.label}
-          </span>{" "}
-          <span className="text-ink-soft">
-            by {view.authorName} · {meta.hint}
-          </span>
-        </p>
+      <ProposalHeading view={view}>
         <Link href={`/proposals/${proposal.id}/review`} className="mt-3 inline-block rounded-md border border-copper px-3 py-1.5 text-sm font-semibold text-copper-deep hover:bg-copper-pale">
           Open the review workspace: diff, bands, remarks →
         </Link>
-      </header>
+      </ProposalHeading>
       <div className="grid gap-8 lg:grid-cols-2 xl:grid-cols-[1fr_20rem_22rem]">
         <div className="min-w-0 space-y-8">
           {proposal.rationale ? (

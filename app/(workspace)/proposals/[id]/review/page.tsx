@@ -7,7 +7,6 @@ import { getProposalView } from "@/board/proposal-view";
 import { getRevisionDocument, listRemarks } from "@/board/queries";
 import { anchorFromQuery, mayFlagBlocking, mayWriteRemark } from "@/board/remark-rules";
 import { acceptanceBlockers } from "@/board/rules";
-import { STAGE_META } from "@/board/stages";
 import { requirePageUser } from "@/lib/auth/guard";
 import { BOARD_ROLES } from "@/lib/auth/navigation";
 import { validityText } from "@/lib/families/view";
@@ -17,6 +16,7 @@ import { proposalSlug } from "@/lib/review/export-names";
 import { buildMetrics } from "@/lib/review/metrics";
 import { buildParameterDiff } from "@/lib/review/param-diff";
 import { canonicalJson } from "@/lib/tb/canonical";
+import { ProposalHeading } from "../proposal-heading";
 import { Section } from "../section";
 import { StagePanel } from "../stage-panel";
 import { BandPanel } from "./band-panel";
@@ -56,25 +56,13 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
     ...(baseDocument ? [{ value: "base", label: `base release ${view.baseVersion}` }] : []),
     ...view.revisions.map((r) => ({ value: `r${r.number}`, label: `revision ${r.number}${r.note ? ` — ${r.note}` : ""}` })),
   ];
-  const meta = STAGE_META[proposal.stage];
 
   return (
     <>
       <Link href={`/proposals/${id}`} className="text-sm text-copper-deep underline">
         ← Proposal overview
       </Link>
-      <header className="mb-6 mt-2">
-        <div className="num text-xs text-ink-soft">
-          {view.familyTitle} · base {view.baseVersion ?? "none"} → revision {latest.number}
-        </div>
-        <h1 className="text-2xl font-semibold tracking-tight">Review: {proposal.title}</h1>
-        <p className="mt-1 text-sm">
-          <span className="rounded bg-paper-deep px-2 py-0.5 font-semibold" data-testid="proposal-stage">
-            {meta.glyph} {meta.label}
-          </span>{" "}
-          <span className="text-ink-soft">by {view.authorName}</span>
-        </p>
-      </header>
+      <ProposalHeading view={view} prefix="Review: " />
 
       <div className="grid gap-8 xl:grid-cols-[1fr_24rem]">
         <div className="min-w-0 space-y-10">
