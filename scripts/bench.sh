@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # npm run bench: speed goals as ratios against references measured in the same run. The board benchmark uses a
-# scratch database on the test cluster, which this script starts (and stops again if it started it).
+# scratch database on the test cluster, which this script starts (and stops again if it started it); the API
+# benchmark serves the production build, made here when the sources changed.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib.sh
@@ -12,4 +13,5 @@ pg_up "$PWD/.data/pg-test" 54339
 recreate_database 54339 bandgate_bench
 export DATABASE_URL="postgres://postgres@127.0.0.1:54339/bandgate_bench"
 node_modules/.bin/tsx db/migrate.ts >/dev/null
+build_if_needed   # the API benchmark serves the built app
 node_modules/.bin/tsx --conditions=react-server bench/index.ts
