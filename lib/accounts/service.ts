@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, isNull } from "drizzle-orm";
+import { and, count, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { invitations, passwordResetTokens, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
@@ -16,6 +16,7 @@ import type { AcceptInvitationInput, ChangePasswordInput, ChangeRolesInput, Invi
 
 const INVITATION_DAYS = 7;
 const RESET_MINUTES = 60;
+const MAX_RESETS_PER_WINDOW = 3;
 
 function appLink(path: string): string {
   return new URL(path, serverEnv().APP_URL).toString();
@@ -143,6 +144,13 @@ export async function requestPasswordReset(email: string): Promise<void> {
   await db.transaction(async (tx) => {
     const [user] = await tx.select({ id: users.id, name: users.name, active: users.active }).from(users).where(eq(users.email, email));
     if (!user || !user.active) return;
+    const since = new Date(Date.now() - RESET_MINUTES * 60_000);
+    const [{ recent }] = await tx
+      .select({ recent: count() })
+      .from(passwordResetTokens)
+      .where(and(eq(passwordResetTokens.userId, user.id), gt(passwordResetTokens.createdAt, since)));
+    // Same answer as ever, but no more mail: stops a stranger from flooding someone's inbox with reset links.
+    if (recent >= MAX_RESETS_PER_WINDOW) return;
     await tx
       .update(passwordResetTokens)
       .set({ usedAt: new Date() })

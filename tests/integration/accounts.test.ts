@@ -122,6 +122,15 @@ describe("password reset", () => {
   });
 });
 
+describe("password reset flooding", () => {
+  it("sends at most three reset links an hour to one account, answering the same way every time", async () => {
+    const person = await createPerson(["author"]);
+    for (let i = 0; i < 5; i++) await requestPasswordReset(person.email);
+    const resets = (await mailTo(person.email)).filter((m) => m.subject === "Reset your Bandgate password");
+    expect(resets).toHaveLength(3);
+  });
+});
+
 describe("sign-in throttling", () => {
   it("locks an account after repeated failures, even for the right password, with its own code", async () => {
     const person = await createPerson(["reviewer"]);
