@@ -2,7 +2,9 @@ import "server-only";
 import { eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { webhookAttempts, webhookDeliveries, webhookSubscriptions } from "@/db/schema";
+import { resolveHost } from "@/lib/registry/resolve-host";
 import { SIGNATURE_HEADER, signWebhookBody } from "@/lib/registry/signing";
+import { webhookTargetProblem } from "@/lib/registry/webhook-target";
 import { jobSettings } from "./settings";
 
 export class DeliveryFailed extends Error {}
@@ -38,21 +40,25 @@ export async function deliverWebhook(deliveryId: string, isLastTry: boolean): Pr
     .set({ attempts: sql`${webhookDeliveries.attempts} + 1`, updatedAt: new Date() })
     .where(eq(webhookDeliveries.id, deliveryId))
     .returning({ attempt: webhookDeliveries.attempts });
-  const result = row.active
-    ? await post(row.url, row.body, {
+  // Checked again at delivery time: a name that resolved to a public address when it was added may not any more.
+  const refused = row.active ? await webhookTargetProblem(row.url, resolveHost, jobSettings().WEBHOOK_ALLOW_PRIVATE) : null;
+  const result = !row.active
+    ? { statusCode: null, error: "subscription removed", excerpt: null, ms: 0 }
+    : refused
+      ? { statusCode: null, error: `refused: ${refused}`, excerpt: null, ms: 0 }
+      : await post(row.url, row.body, {
         "content-type": "application/json",
         "user-agent": "Bandgate-Webhook/1",
         [SIGNATURE_HEADER]: signWebhookBody(row.secret, row.body),
         "Bandgate-Event": event,
         "Bandgate-Delivery": row.id,
-      })
-    : { statusCode: null, error: "subscription removed", excerpt: null, ms: 0 };
+      });
   await db.insert(webhookAttempts).values({ deliveryId, attempt, statusCode: result.statusCode, error: result.error, durationMs: Math.round(result.ms), responseExcerpt: result.excerpt });
   if (result.error === null) {
     await db.update(webhookDeliveries).set({ status: "delivered", deliveredAt: new Date(), updatedAt: new Date() }).where(eq(webhookDeliveries.id, deliveryId));
     return;
   }
-  if (isLastTry || !row.active) {
+  if (isLastTry || !row.active || refused) {
     await db.update(webhookDeliveries).set({ status: "failed", updatedAt: new Date() }).where(eq(webhookDeliveries.id, deliveryId));
     return;
   }

@@ -7,6 +7,8 @@ const schema = z.object({
   /** Base delay; pg-boss doubles it on each retry (with jitter): 15 s, 30 s, 1 min, … about 1 h by the 8th. */
   WEBHOOK_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(15),
   WEBHOOK_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(10_000),
+  /** Local set-ups only (npm start, npm test): let webhooks reach private and loopback addresses. */
+  WEBHOOK_ALLOW_PRIVATE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
 });
 
 export type JobSettings = z.infer<typeof schema>;

@@ -5,7 +5,10 @@ import { familySubscriptions, modelFamilies, webhookAttempts, webhookDeliveries,
 import { recordAudit } from "@/lib/audit";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError } from "@/lib/errors";
+import { jobSettings } from "@/lib/jobs/settings";
+import { resolveHost } from "./resolve-host";
 import type { WebhookInput } from "./schemas";
+import { webhookTargetProblem } from "./webhook-target";
 
 async function familyIdOf(slug: string): Promise<string> {
   const [row] = await db.select({ id: modelFamilies.id }).from(modelFamilies).where(eq(modelFamilies.slug, slug));
@@ -15,6 +18,8 @@ async function familyIdOf(slug: string): Promise<string> {
 
 export async function addWebhook(actor: SessionUser, input: WebhookInput): Promise<{ id: string }> {
   const familyId = await familyIdOf(input.familySlug);
+  const problem = await webhookTargetProblem(input.url, resolveHost, jobSettings().WEBHOOK_ALLOW_PRIVATE);
+  if (problem) throw new AppError("invalid:webhook-url", `Bandgate will not call that address: ${problem}.`, { url: [`Not allowed: ${problem}.`] });
   return db.transaction(async (tx) => {
     const [row] = await tx.insert(webhookSubscriptions).values({ userId: actor.id, familyId, url: input.url, secret: input.secret }).returning({ id: webhookSubscriptions.id });
     await recordAudit(tx, { actorId: actor.id, action: "webhook.added", subjectType: "webhook-subscription", subjectId: row.id, after: { family: input.familySlug, url: input.url } });
