@@ -141,20 +141,12 @@ export async function getLatestRevision(conn: Conn, proposalId: string) {
   return row ?? null;
 }
 
-export function listRevisions(proposalId: string) {
-  return db
-    .select({ id: revisions.id, number: revisions.number, sha256: revisions.sha256, physicsHash: revisions.physicsHash, note: revisions.note, createdAt: revisions.createdAt, checksPassing: revisions.checksPassing, maxShift: revisions.maxShift })
-    .from(revisions)
-    .where(eq(revisions.proposalId, proposalId))
-    .orderBy(desc(revisions.number));
-}
-
 export async function getRelease(conn: Conn, id: string) {
   const [row] = await conn.select().from(releases).where(eq(releases.id, id));
   return row ?? null;
 }
 
-export async function getFamilyBySlugForUpdate(conn: Conn, slug: string) {
+export async function findFamilyBySlug(conn: Conn, slug: string) {
   const [row] = await conn.select().from(modelFamilies).where(eq(modelFamilies.slug, slug));
   return row ?? null;
 }

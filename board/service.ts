@@ -11,7 +11,7 @@ import type { AcceptanceCriterionInput } from "@/lib/tb/analysis/acceptance";
 import type { ModelDocument } from "@/lib/tb/document";
 import { loadProposalFacts } from "./facts";
 import { notifyMove, notifyReviewerAssigned, notifyVerdict } from "./notify";
-import { getBoardCard, getFamilyBySlugForUpdate, getLatestRevision, getRelease, getUserRoles, lockProposal } from "./queries";
+import { getBoardCard, findFamilyBySlug, getLatestRevision, getRelease, getUserRoles, lockProposal } from "./queries";
 import { deriveRevisionFacts, parseDocument } from "./revision-facts";
 import { decideAssignReviewer, decideManageReviewers, decideMove, decideRevise, decideWaiveChecks, type MoveDecision } from "./rules";
 import type { AssignInput, CreateProposalInput, EditTextInput, MoveInput, SaveRevisionInput, VerdictInput, WaiveInput } from "./schemas";
@@ -57,7 +57,7 @@ async function baseDocumentOf(tx: Tx, baseReleaseId: string | null): Promise<Mod
 export async function createProposal(actor: SessionUser, input: CreateProposalInput, document?: unknown): Promise<{ proposalId: string }> {
   if (!hasAnyRole(actor.roles, ["author"])) throw new AppError("forbidden:role", "Only authors may start proposals.");
   return db.transaction(async (tx) => {
-    const family = await getFamilyBySlugForUpdate(tx, input.familySlug);
+    const family = await findFamilyBySlug(tx, input.familySlug);
     if (!family) throw new AppError("not-found:family", "That model family does not exist.", { familySlug: ["Unknown family."] });
     const base = input.baseReleaseId ? await getRelease(tx, input.baseReleaseId) : null;
     if (input.baseReleaseId && (!base || base.familyId !== family.id)) {

@@ -17,6 +17,13 @@ function phaseScratch(model: CompiledModel) {
  * Writes the Bloch Hamiltonian at fractional wave vector kFrac into full row-major re/im (size² each).
  * One cos/sin per distinct displacement, then a single pass over the precomputed terms; no allocation.
  */
+/** Zero matrix with the on-site energies on the diagonal: where every H(k) starts. */
+function startWithOnsite(onsite: ArrayLike<number>, n: number, re: Float64Array, im: Float64Array): void {
+  re.fill(0, 0, n * n);
+  im.fill(0, 0, n * n);
+  for (let i = 0; i < n; i++) re[i * n + i] = onsite[i];
+}
+
 export function fillHamiltonian(model: CompiledModel, kFrac: ArrayLike<number>, re: Float64Array, im: Float64Array): void {
   const n = model.size;
   if (re.length < n * n || im.length < n * n) throw new Error(`fillHamiltonian: buffers need ${n * n} entries`);
@@ -29,10 +36,7 @@ export function fillHamiltonian(model: CompiledModel, kFrac: ArrayLike<number>, 
     cos[p] = Math.cos(phase);
     sin[p] = Math.sin(phase);
   }
-  re.fill(0, 0, n * n);
-  im.fill(0, 0, n * n);
-  const onsite = model.onsite;
-  for (let i = 0; i < n; i++) re[i * n + i] = onsite[i];
+  startWithOnsite(model.onsite, n, re, im);
   const idx = model.termIndex, dIdx = model.termDisplacement, tr = model.termRe, ti = model.termIm;
   for (let t = 0; t < idx.length; t++) {
     const p = dIdx[t];
@@ -128,10 +132,7 @@ export function fillHamiltonianLower(
     cos[u] = Math.cos(phase);
     sin[u] = Math.sin(phase);
   }
-  re.fill(0, 0, n * n);
-  im.fill(0, 0, n * n);
-  const onsite = model.onsite;
-  for (let i = 0; i < n; i++) re[i * n + i] = onsite[i];
+  startWithOnsite(model.onsite, n, re, im);
   const { index, phase, value } = plan;
   for (let t = 0; t < index.length; t++) {
     const u = phase[t];

@@ -1,33 +1,16 @@
 "use client";
 
-import Link from "next/link";
-import { ActionForm } from "@/app/_components/action-form";
-import { NewPasswordFields, primaryButtonClass } from "@/app/_components/form-parts";
+import { TokenPasswordForm } from "@/app/_components/token-password-form";
 import { acceptInvitationAction } from "../actions";
 
 export function JoinForm({ token }: { token: string }) {
   return (
-    <ActionForm
+    <TokenPasswordForm
       action={acceptInvitationAction}
+      token={token}
       label="Set your password"
-      done={({ email }) => (
-        <div role="status">
-          <p className="mb-4">Your account {email} is ready.</p>
-          <Link href="/login" className={primaryButtonClass}>
-            Sign in
-          </Link>
-        </div>
-      )}
-    >
-      {({ fieldErrors, pending }) => (
-        <>
-          <input type="hidden" name="token" value={token} />
-          <NewPasswordFields fieldErrors={fieldErrors} />
-          <button type="submit" disabled={pending} className={primaryButtonClass}>
-            {pending ? "Saving…" : "Set password and join"}
-          </button>
-        </>
-      )}
-    </ActionForm>
+      submitLabel="Set password and join"
+      doneText={({ email }) => `Your account ${email} is ready.`}
+    />
   );
 }

@@ -1,33 +1,16 @@
 "use client";
 
-import Link from "next/link";
-import { ActionForm } from "@/app/_components/action-form";
-import { NewPasswordFields, primaryButtonClass } from "@/app/_components/form-parts";
+import { TokenPasswordForm } from "@/app/_components/token-password-form";
 import { resetPasswordAction } from "../actions";
 
 export function ResetForm({ token }: { token: string }) {
   return (
-    <ActionForm
+    <TokenPasswordForm
       action={resetPasswordAction}
+      token={token}
       label="Choose a new password"
-      done={() => (
-        <div role="status">
-          <p className="mb-4">Your password was changed.</p>
-          <Link href="/login" className={primaryButtonClass}>
-            Sign in
-          </Link>
-        </div>
-      )}
-    >
-      {({ fieldErrors, pending }) => (
-        <>
-          <input type="hidden" name="token" value={token} />
-          <NewPasswordFields fieldErrors={fieldErrors} />
-          <button type="submit" disabled={pending} className={primaryButtonClass}>
-            {pending ? "Saving…" : "Change password"}
-          </button>
-        </>
-      )}
-    </ActionForm>
+      submitLabel="Change password"
+      doneText={() => "Your password was changed."}
+    />
   );
 }
