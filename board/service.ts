@@ -6,18 +6,18 @@ import { proposals, reviewerAssignments, revisions, verdicts } from "@/db/schema
 import { recordAudit } from "@/lib/audit";
 import { hasAnyRole } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
-import { AppError } from "@/lib/errors";
+import { AppError, type ErrorCode } from "@/lib/errors";
 import type { AcceptanceCriterionInput } from "@/lib/tb/analysis/acceptance";
 import type { ModelDocument } from "@/lib/tb/document";
 import { loadProposalFacts } from "./facts";
 import { notifyMove, notifyReviewerAssigned, notifyVerdict } from "./notify";
 import { getBoardCard, findFamilyBySlug, getLatestRevision, getRelease, getUserRoles, lockProposal } from "./queries";
 import { deriveRevisionFacts, parseDocument } from "./revision-facts";
-import { decideAssignReviewer, decideManageReviewers, decideMove, decideRevise, decideWaiveChecks, type MoveDecision } from "./rules";
+import { decideAssignReviewer, decideManageReviewers, decideMove, decideRevise, decideWaiveChecks, type MoveDecision, type RuleActor as RuleActorLike } from "./rules";
 import type { AssignInput, CreateProposalInput, EditTextInput, MoveInput, SaveRevisionInput, VerdictInput, WaiveInput } from "./schemas";
 import { STAGE_META } from "./stages";
 
-function enforce(decision: MoveDecision): void {
+export function enforce(decision: MoveDecision | { allowed: false; code: ErrorCode; reasons: string[] }): void {
   if (!decision.allowed) throw new AppError(decision.code, decision.reasons.join(" "), undefined, { reasons: decision.reasons });
 }
 
@@ -89,26 +89,47 @@ export async function saveRevision(actor: SessionUser, input: SaveRevisionInput)
   if (!parsed.ok) throw invalidDocument(parsed.issues);
   return db.transaction(async (tx) => {
     const proposal = await lockFresh(tx, input.proposalId, input.version);
-    enforce(decideRevise(actor, proposal));
-    const latest = await getLatestRevision(tx, proposal.id);
-    const family = await loadProposalFacts(tx, proposal);
-    const facts = deriveRevisionFacts(parsed.doc, await baseDocumentOf(tx, proposal.baseReleaseId), family.criteria);
-    if (latest && latest.sha256 === facts.sha256) {
-      throw new AppError("invalid:unchanged", "Nothing changed since the latest revision, so no new revision was saved.");
-    }
-    const number = (latest?.number ?? 0) + 1;
-    await tx.insert(revisions).values({ proposalId: proposal.id, number, document: parsed.doc, note: input.note, createdBy: actor.id, ...facts });
-    await bump(tx, proposal.id, proposal.version);
-    await recordAudit(tx, {
-      actorId: actor.id,
-      action: "proposal.revised",
-      subjectType: "proposal",
-      subjectId: proposal.id,
-      before: latest ? { revision: latest.number, physicsHash: latest.physicsHash } : null,
-      after: { revision: number, physicsHash: facts.physicsHash, checksPassing: facts.checksPassing },
-    });
-    return { revision: number, version: proposal.version + 1 };
+    const { revision, version } = await appendRevision(tx, actor, proposal, parsed.doc, input.note);
+    return { revision, version };
   });
+}
+
+type LockedProposal = NonNullable<Awaited<ReturnType<typeof lockProposal>>>;
+
+/**
+ * Adds the next revision to a proposal the caller has locked (rules, checks, audit, version bump). Shared by the
+ * editor's save and by a refit's result.
+ */
+export async function appendRevision(
+  tx: Tx,
+  actor: RuleActorLike,
+  proposal: LockedProposal,
+  doc: ModelDocument,
+  note: string,
+  auditExtra: Record<string, unknown> = {},
+): Promise<{ revision: number; version: number; revisionId: string }> {
+  enforce(decideRevise(actor, proposal));
+  const latest = await getLatestRevision(tx, proposal.id);
+  const family = await loadProposalFacts(tx, proposal);
+  const facts = deriveRevisionFacts(doc, await baseDocumentOf(tx, proposal.baseReleaseId), family.criteria);
+  if (latest && latest.sha256 === facts.sha256) {
+    throw new AppError("invalid:unchanged", "Nothing changed since the latest revision, so no new revision was saved.");
+  }
+  const number = (latest?.number ?? 0) + 1;
+  const [row] = await tx
+    .insert(revisions)
+    .values({ proposalId: proposal.id, number, document: doc, note, createdBy: actor.id, ...facts })
+    .returning({ id: revisions.id });
+  await bump(tx, proposal.id, proposal.version);
+  await recordAudit(tx, {
+    actorId: actor.id,
+    action: "proposal.revised",
+    subjectType: "proposal",
+    subjectId: proposal.id,
+    before: latest ? { revision: latest.number, physicsHash: latest.physicsHash } : null,
+    after: { revision: number, physicsHash: facts.physicsHash, checksPassing: facts.checksPassing, ...auditExtra },
+  });
+  return { revision: number, version: proposal.version + 1, revisionId: row.id };
 }
 
 export async function editProposalText(actor: SessionUser, input: EditTextInput): Promise<{ version: number }> {

@@ -5,6 +5,8 @@ import * as schema from "./schema";
 
 export type Database = NodePgDatabase<typeof schema>;
 export type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
+/** Either the pool or a transaction: queries that may run inside one take this. */
+export type Conn = Database | Tx;
 
 const cache = globalThis as unknown as { bandgatePool?: Pool; bandgateDb?: Database };
 

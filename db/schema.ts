@@ -330,3 +330,4 @@ export const remarks = pgTable(
 export type Remark = typeof remarks.$inferSelect;
 
 export * from "./schema-registry";
+export * from "./schema-fits";

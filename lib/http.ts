@@ -3,14 +3,18 @@ import { z } from "zod";
 import { fieldErrorsOf } from "./action";
 import { AppError, toErrorResponse } from "./errors";
 
-/** Parse a JSON request body with zod; bad JSON or a bad shape is a 400 with field errors. */
-export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
-  let raw: unknown;
+/** The JSON body, unvalidated (for services that validate it themselves); bad JSON is a 400. */
+export async function readJsonBody(request: Request): Promise<unknown> {
   try {
-    raw = await request.json();
+    return await request.json();
   } catch {
     throw new AppError("invalid:json", "The request body is not valid JSON.");
   }
+}
+
+/** Parse a JSON request body with zod; bad JSON or a bad shape is a 400 with field errors. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
+  const raw = await readJsonBody(request);
   const parsed = schema.safeParse(raw);
   if (!parsed.success) throw new AppError("invalid:input", "The request body has problems.", fieldErrorsOf(parsed.error));
   return parsed.data;

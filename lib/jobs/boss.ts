@@ -1,7 +1,7 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { serverEnv } from "@/lib/env";
-import { ensureQueues, QUEUES, type ReleaseEventJob } from "./queues";
+import { ensureQueues, fitJobLimits, QUEUES, type FitRunJob, type ReleaseEventJob } from "./queues";
 
 const cache = globalThis as unknown as { bandgateBoss?: Promise<PgBoss> };
 
@@ -31,6 +31,12 @@ export async function enqueueReleaseEvent(eventId: string): Promise<void> {
   } catch (err) {
     console.error("[bandgate] could not enqueue release event", eventId, err instanceof Error ? err.message : err);
   }
+}
+
+/** Hands a committed fit run to a worker; the job id is the fit id, so a repeated send is a no-op. */
+export async function enqueueFit(fitId: string): Promise<void> {
+  const boss = await jobQueue();
+  await boss.send(QUEUES.fitRun, { fitId } satisfies FitRunJob, { id: fitId, ...fitJobLimits() });
 }
 
 /** Stops the sending instance (scripts and tests that exit). */

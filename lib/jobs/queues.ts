@@ -7,7 +7,14 @@ export const QUEUES = {
   webhookDelivery: "webhook-delivery",
   registryMail: "registry-mail",
   rateWindowCleanup: "rate-window-cleanup",
+  fitRun: "fit-run",
+  /** Fit jobs that used up their retries (a worker died each time) land here and are marked failed. */
+  fitRunDead: "fit-run-dead",
 } as const;
+
+export interface FitRunJob {
+  fitId: string;
+}
 
 export interface ReleaseEventJob {
   eventId: string;
@@ -26,10 +33,18 @@ export async function ensureQueues(boss: PgBoss): Promise<void> {
   await boss.createQueue(QUEUES.webhookDelivery, { name: QUEUES.webhookDelivery, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true });
   await boss.createQueue(QUEUES.registryMail, { name: QUEUES.registryMail, retryLimit: 5, retryDelay: 30, retryBackoff: true });
   await boss.createQueue(QUEUES.rateWindowCleanup, { name: QUEUES.rateWindowCleanup, policy: "singleton" });
+  await boss.createQueue(QUEUES.fitRunDead, { name: QUEUES.fitRunDead, retryLimit: 3, retryDelay: 5 });
+  await boss.createQueue(QUEUES.fitRun, { name: QUEUES.fitRun, deadLetter: QUEUES.fitRunDead, ...fitJobLimits() });
 }
 
 /** Retry options sent with each webhook job, so a changed setting applies without recreating the queue. */
 export function webhookJobOptions(deliveryId: string): PgBoss.SendOptions {
   const s = jobSettings();
   return { id: deliveryId, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true };
+}
+
+/** Retries and expiry of a fit job: it expires a minute after the fit's own time limit, so only a dead worker's job expires. */
+export function fitJobLimits(): { retryLimit: number; retryDelay: number; expireInSeconds: number } {
+  const s = jobSettings();
+  return { retryLimit: s.FIT_RETRY_LIMIT, retryDelay: 2, expireInSeconds: s.FIT_TIME_LIMIT_SECONDS + 60 };
 }

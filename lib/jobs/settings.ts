@@ -9,6 +9,14 @@ const schema = z.object({
   WEBHOOK_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(10_000),
   /** Local set-ups only (npm start, npm test): let webhooks reach private and loopback addresses. */
   WEBHOOK_ALLOW_PRIVATE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  /** Refits one worker process runs at once, each in its own thread. Default: the machine's cores. */
+  FIT_CONCURRENCY: z.coerce.number().int().min(1).max(64).optional(),
+  /** A refit is stopped at its best point ("not converged") after this long; its job expires a minute later. */
+  FIT_TIME_LIMIT_SECONDS: z.coerce.number().int().min(10).max(24 * 3600).default(1800),
+  /** Attempts after the first when a worker dies or its thread crashes. */
+  FIT_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
+  /** How often a running refit writes progress (and looks for a cancel request). */
+  FIT_PROGRESS_MS: z.coerce.number().int().min(100).max(1000).default(400),
 });
 
 export type JobSettings = z.infer<typeof schema>;

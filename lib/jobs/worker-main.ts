@@ -1,3 +1,4 @@
+import { availableParallelism } from "node:os";
 import PgBoss from "pg-boss";
 import { lt } from "drizzle-orm";
 import { closeDb, db } from "@/db/client";
@@ -5,13 +6,17 @@ import { apiRateWindows } from "@/db/schema";
 import { serverEnv } from "@/lib/env";
 import { deliverWebhook } from "./deliver-webhook";
 import { fanOutReleaseEvent } from "./fan-out";
-import { ensureQueues, QUEUES, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
+import { failFit } from "@/lib/fits/worker-side";
+import { ensureQueues, QUEUES, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
+import { runFitJob } from "./run-fit";
+import { giveBackStalledFits } from "./stalled-fits";
 import { sendRegistryMail } from "./send-registry-mail";
 import { jobSettings } from "./settings";
 
 /**
- * The background worker: takes release events, webhook deliveries and registry e-mail from the pg-boss queue in the
- * same PostgreSQL. Run as many as needed; pg-boss hands each job to one of them.
+ * The background worker: takes refits, release events, webhook deliveries and registry e-mail from the pg-boss queue
+ * in the same PostgreSQL. Run as many as needed, on as many machines as share the database; pg-boss hands each job
+ * to one of them. Each process runs up to FIT_CONCURRENCY refits at once, each in its own thread.
  * Start: node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
  */
 const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, max: 4 });
@@ -30,12 +35,28 @@ await boss.work(QUEUES.rateWindowCleanup, async () => {
   await db.delete(apiRateWindows).where(lt(apiRateWindows.windowStart, new Date(Date.now() - 60 * 60 * 1000)));
 });
 await boss.schedule(QUEUES.rateWindowCleanup, "17 * * * *");
-console.log("[bandgate worker] taking jobs");
+
+const shutdown = new AbortController();
+const fitSlots = jobSettings().FIT_CONCURRENCY ?? availableParallelism();
+for (let i = 0; i < fitSlots; i++) {
+  await boss.work<FitRunJob>(QUEUES.fitRun, { ...polling, batchSize: 1, includeMetadata: true }, async ([job]) =>
+    runFitJob({ fitId: job.data.fitId, retryCount: job.retryCount, retryLimit: job.retryLimit, shutdown: shutdown.signal }),
+  );
+}
+await boss.work<FitRunJob>(QUEUES.fitRunDead, polling, async ([job]) =>
+  failFit(job.data.fitId, "the worker running it stopped (crash or restart) on every attempt; no retries left"),
+);
+const sweeper = setInterval(() => {
+  giveBackStalledFits(boss).catch((err) => console.error("[bandgate worker] stalled-fit sweep failed", err instanceof Error ? err.message : err));
+}, 15_000);
+console.log(`[bandgate worker] taking jobs (${fitSlots} refit slots)`);
 
 let stopping = false;
 async function stop() {
   if (stopping) return;
   stopping = true;
+  clearInterval(sweeper);
+  shutdown.abort();
   await boss.stop({ graceful: true, timeout: 10_000, wait: true });
   await closeDb();
   process.exit(0);

@@ -5,8 +5,9 @@
  * shared counter, so a worker slowed by other load simply takes fewer chunks.
  */
 import { availableParallelism } from "node:os";
-import { Worker } from "node:worker_threads";
+import type { Worker } from "node:worker_threads";
 import type { CompiledModel } from "./model";
+import { startModuleWorker } from "./worker-start";
 import type { BatchRequest, WorkerReply } from "./parallel-bands-protocol";
 
 export interface BandWorkerPool {
@@ -21,22 +22,8 @@ export interface BandWorkerPool {
 /** Chunks per worker in a batch: enough to even out load, few enough that the counter is never contended. */
 const CHUNKS_PER_THREAD = 8;
 
-/**
- * Compiled JavaScript runs the worker file directly; when this module runs as TypeScript source (tsx), the
- * worker thread does not inherit the TypeScript loader, so it registers it before importing the worker.
- */
 function startWorker(): Worker {
-  const here = import.meta.url;
-  if (!here.endsWith(".ts")) return new Worker(new URL("./parallel-bands-worker.js", here));
-  const target = new URL("./parallel-bands-worker.ts", here).href;
-  let api = "tsx/esm/api";
-  try {
-    api = import.meta.resolve(api);
-  } catch {
-    // keep the bare specifier: it resolves from the working directory
-  }
-  const code = `import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(target)}); })`;
-  return new Worker(code, { eval: true });
+  return startModuleWorker(import.meta.url, "parallel-bands-worker");
 }
 
 export function createBandWorkerPool(threads = Math.min(2, availableParallelism())): BandWorkerPool {

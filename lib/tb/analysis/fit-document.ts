@@ -3,8 +3,9 @@ import { compileModel } from "../model";
 import { mirrorBondKey } from "../orbitals";
 import { listParameters, setParameters } from "../parameters";
 import type { ReferenceBands } from "./compare-reference";
-import { fitBandModel, type FitResult } from "./fit";
-import { FitInputError, type BandFitOptions } from "./fit-input";
+import { fitBandModel, selectWeightedPairs, type FitModel, type FitResult } from "./fit";
+import { FitInputError, validateFitInput, validatePointCount, type BandFitOptions } from "./fit-input";
+import type { WeightedPair } from "./fit-residuals";
 import { spinDegeneracyOf } from "./model-solver";
 import { buildDerivativeModels, computeBandDerivatives } from "./sensitivity";
 
@@ -12,17 +13,39 @@ import { buildDerivativeModels, computeBandDerivatives } from "./sensitivity";
  * Fit of chosen document parameters (keys from listParameters) to reference bands. The Jacobian is exact and cheap:
  * ∂E_n(k)/∂p by Hellmann–Feynman with the fixed ∂H/∂p models (H is linear in every parameter).
  */
+export interface DocumentFitOptions extends BandFitOptions {
+  /** Start values by key; default: the document's values. */
+  start?: Record<string, number>;
+  /**
+   * Extra starts after the first, drawn from a seeded generator (see restartPoint): the best of all is kept.
+   * Default 0. The same seed gives the same starts, so a stored fit re-runs to the same result.
+   */
+  restarts?: number;
+  seed?: number;
+}
+
+export interface RestartOutcome {
+  start: number[];
+  status: FitResult["status"];
+  cost: number;
+  iterations: number;
+}
+
 export interface DocumentFitResult extends FitResult {
   /** The document with the best values. */
   document: ModelDocument;
+  /** One entry per start (the first is the document's values). */
+  starts: RestartOutcome[];
 }
 
-export async function fitDocument(
-  doc: ModelDocument,
-  keys: string[],
-  reference: ReferenceBands,
-  opts: BandFitOptions & { start?: Record<string, number> } = {},
-): Promise<DocumentFitResult> {
+interface PreparedFit {
+  start: number[];
+  model: FitModel;
+  options: BandFitOptions;
+  withValues(p: ArrayLike<number>): ModelDocument;
+}
+
+function checkKeys(doc: ModelDocument, keys: string[]): Map<string, number> {
   const params = new Map(listParameters(doc).map((p) => [p.key, p.value]));
   for (const key of keys) {
     if (!params.has(key)) throw new FitInputError(`fit: unknown parameter key "${key}"`);
@@ -33,6 +56,12 @@ export async function fitDocument(
       throw new FitInputError(`fit: ${key} and ${mirror} are one integral in a one-species shell; keep only one of them in the document to fit it`);
     }
   }
+  return params;
+}
+
+/** Checks keys and k-point dimensions and builds the band model of the chosen parameters. */
+function prepareDocumentFit(doc: ModelDocument, keys: string[], reference: ReferenceBands, opts: DocumentFitOptions): PreparedFit {
+  const params = checkKeys(doc, keys);
   const d = doc.lattice.dimension;
   reference.kFrac.forEach((k, i) => {
     if (k.length !== d) throw new FitInputError(`fit: reference k-point ${i} has ${k.length} components, the lattice has dimension ${d}`);
@@ -41,12 +70,98 @@ export async function fitDocument(
   const derivativeModels = buildDerivativeModels(doc, keys);
   const withValues = (p: ArrayLike<number>) => setParameters(doc, Object.fromEntries(keys.map((k, i) => [k, p[i]])));
   const occupiedBands = opts.occupiedBands ?? Math.round(doc.electronCount / spinDegeneracyOf(compileModel(doc)));
-  const result = await fitBandModel(
-    { evaluate: (p) => computeBandDerivatives(compileModel(withValues(p)), derivativeModels, reference.kFrac) },
-    keys,
+  return {
     start,
-    reference,
-    { ...opts, occupiedBands },
-  );
-  return { ...result, document: withValues(result.values) };
+    model: { evaluate: (p) => computeBandDerivatives(compileModel(withValues(p)), derivativeModels, reference.kFrac) },
+    options: { ...opts, occupiedBands },
+    withValues,
+  };
+}
+
+export interface DocumentFitPreview {
+  start: number[];
+  /** Added to every reference energy (alignment at the start values). */
+  shift: number;
+  /** The points that enter the fit, with their weights. */
+  pairs: WeightedPair[];
+  /** Model bands at the reference k-points, at the start values. */
+  energies: number[][];
+}
+
+/** What a fit would use, without running it; refuses the same bad input as fitDocument. */
+export function previewDocumentFit(doc: ModelDocument, keys: string[], reference: ReferenceBands, opts: DocumentFitOptions = {}): DocumentFitPreview {
+  const prepared = prepareDocumentFit(doc, keys, reference, opts);
+  validateFitInput(keys, prepared.start, reference, prepared.options);
+  const first = prepared.model.evaluate(Float64Array.from(prepared.start));
+  const { shift, pairs } = selectWeightedPairs(first.energies, reference, prepared.options);
+  validatePointCount(pairs.length, keys.length, opts.window);
+  return { start: prepared.start, shift, pairs, energies: first.energies.map((row) => Array.from(row)) };
+}
+
+/** mulberry32 (Tommy Ettinger's public-domain 32-bit generator): small, fast and the same on every platform. */
+export function seededUniform(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * A restart point: uniform within the bounds where both are finite, otherwise the start value moved by up to
+ * ±25 % of its size (at least ±0.25 eV), clipped to any one-sided bound.
+ */
+export function restartPoint(start: number[], lower: number[] | undefined, upper: number[] | undefined, next: () => number): number[] {
+  return start.map((x, i) => {
+    const lo = lower?.[i] ?? -Infinity;
+    const hi = upper?.[i] ?? Infinity;
+    const u = next();
+    if (Number.isFinite(lo) && Number.isFinite(hi)) return lo + u * (hi - lo);
+    const span = Math.max(0.25 * Math.abs(x), 0.25);
+    return Math.min(hi, Math.max(lo, x + (2 * u - 1) * span));
+  });
+}
+
+export async function fitDocument(doc: ModelDocument, keys: string[], reference: ReferenceBands, opts: DocumentFitOptions = {}): Promise<DocumentFitResult> {
+  const t0 = Date.now();
+  const prepared = prepareDocumentFit(doc, keys, reference, opts);
+  const restarts = opts.restarts ?? 0;
+  if (!Number.isInteger(restarts) || restarts < 0) throw new FitInputError("fit: restarts must be a whole number ≥ 0");
+  const next = seededUniform(opts.seed ?? 1);
+  let iterationsBefore = 0;
+  let best: FitResult | null = null;
+  const starts: RestartOutcome[] = [];
+  for (let run = 0; run <= restarts; run++) {
+    const start = run === 0 ? prepared.start : restartPoint(prepared.start, opts.lower, opts.upper, next);
+    const offset = iterationsBefore;
+    const result = await fitBandModel(prepared.model, keys, start, reference, {
+      ...prepared.options,
+      onProgress: opts.onProgress && ((p) => opts.onProgress?.({ ...p, iteration: offset + p.iteration, elapsedMs: Date.now() - t0 })),
+    });
+    iterationsBefore += result.iterations;
+    starts.push({ start, status: result.status, cost: result.cost, iterations: result.iterations });
+    best = pick(best, result);
+    if (result.status === "cancelled") break;
+  }
+  const chosen = best as FitResult;
+  return {
+    ...chosen,
+    status: starts.some((s) => s.status === "cancelled") ? "cancelled" : chosen.status,
+    reason: starts.some((s) => s.status === "cancelled") ? "cancelled by the caller" : chosen.reason,
+    start: prepared.start,
+    iterations: iterationsBefore,
+    elapsedMs: Date.now() - t0,
+    document: prepared.withValues(chosen.values),
+    starts,
+  };
+}
+
+/** The lower cost wins; a cancelled run only wins when nothing else has finished. */
+function pick(best: FitResult | null, result: FitResult): FitResult {
+  if (!best) return result;
+  if (best.status === "cancelled" && result.status !== "cancelled") return result;
+  return result.cost < best.cost ? result : best;
 }

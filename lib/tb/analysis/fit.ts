@@ -44,11 +44,7 @@ export async function fitBandModel(
   const P = names.length;
   const first = model.evaluate(Float64Array.from(start));
   if (first.energies.length !== reference.energies.length) throw new Error("fit: the model must be evaluated at the reference k-points");
-  const compareOpts = { ...opts, alignment: opts.alignment ?? "none" };
-  const shift0 = computeAlignmentShift(first.energies, reference, compareOpts);
-  const pairs: WeightedPair[] = selectReferencePairs(first.energies, reference, shift0, compareOpts)
-    .map((p) => ({ ...p, weight: (opts.bandWeights?.[p.referenceBand] ?? 1) * (opts.pointWeights?.[p.k]?.[p.referenceBand] ?? 1) }))
-    .filter((p) => p.weight > 0);
+  const { pairs } = selectWeightedPairs(first.energies, reference, opts);
   validatePointCount(pairs.length, P, opts.window);
   const lm = await minimiseLeastSquares(
     { evaluate: (p) => buildResiduals(model.evaluate(p), pairs, reference, opts, P), lower: bound(opts.lower, P, -Infinity), upper: bound(opts.upper, P, Infinity) },
@@ -73,6 +69,23 @@ export async function fitBandModel(
     statistics: computeFitStatistics(final.r, final.jac, P),
     elapsedMs: Date.now() - t0,
   };
+}
+
+/**
+ * The reference points that enter the fit and their weights, chosen at the start values: window on the aligned
+ * reference, band offset, band weight × point weight, zero weights dropped. Also used by the preview.
+ */
+export function selectWeightedPairs(
+  energies: FitEvaluation["energies"],
+  reference: ReferenceBands,
+  opts: BandFitOptions,
+): { shift: number; pairs: WeightedPair[] } {
+  const compareOpts = { ...opts, alignment: opts.alignment ?? "none" };
+  const shift = computeAlignmentShift(energies, reference, compareOpts);
+  const pairs = selectReferencePairs(energies, reference, shift, compareOpts)
+    .map((p) => ({ ...p, weight: (opts.bandWeights?.[p.referenceBand] ?? 1) * (opts.pointWeights?.[p.k]?.[p.referenceBand] ?? 1) }))
+    .filter((p) => p.weight > 0);
+  return { shift, pairs };
 }
 
 function bound(values: number[] | undefined, n: number, fill: number): Float64Array {

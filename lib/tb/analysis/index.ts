@@ -56,4 +56,4 @@ export { minimiseLeastSquares, type LeastSquaresProblem, type LmOptions, type Lm
 export { fitBandModel, type FitModel, type FitResult } from "./fit";
 export { FitInputError, validateFitInput, type BandFitOptions } from "./fit-input";
 export { computeFitStatistics, type FitStatistics } from "./fit-statistics";
-export { fitDocument, type DocumentFitResult } from "./fit-document";
+export { fitDocument, previewDocumentFit, type DocumentFitOptions, type DocumentFitPreview, type DocumentFitResult } from "./fit-document";

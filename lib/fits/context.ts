@@ -1,0 +1,62 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import type { Conn } from "@/db/client";
+import { proposals, referenceBandSets, revisions } from "@/db/schema";
+import { getAssignedReviewerIds, getFamilyCuratorIds, getLatestRevision } from "@/board/queries";
+import { parseDocument } from "@/board/revision-facts";
+import { AppError } from "@/lib/errors";
+import { FitInputError } from "@/lib/tb/analysis/fit-input";
+import type { ModelDocument } from "@/lib/tb/document";
+import { buildFitPreview, type FitPreview } from "./preview";
+import type { StoredReference } from "./problem";
+
+/** Everything a refit starts from: the proposal's people, the revision to start at, the reference set. */
+export interface FitContext {
+  proposal: typeof proposals.$inferSelect;
+  facts: { stage: (typeof proposals.$inferSelect)["stage"]; authorId: string; familyCuratorIds: string[]; assignedReviewerIds: string[] };
+  revision: typeof revisions.$inferSelect;
+  document: ModelDocument;
+  reference: typeof referenceBandSets.$inferSelect;
+  parsedReference: StoredReference;
+}
+
+export async function loadFitContext(conn: Conn, proposalId: string, referenceSetId: string, revisionId?: string): Promise<FitContext> {
+  const [proposal] = await conn.select().from(proposals).where(eq(proposals.id, proposalId));
+  if (!proposal) throw new AppError("not-found:proposal", "That proposal does not exist.");
+  const revision = revisionId
+    ? ((await conn.select().from(revisions).where(and(eq(revisions.id, revisionId), eq(revisions.proposalId, proposalId))))[0] ?? null)
+    : await getLatestRevision(conn, proposalId);
+  if (!revision) throw new AppError("not-found:revision", "This proposal has no revision to fit.");
+  const parsed = parseDocument(revision.document);
+  if (!parsed.ok) throw new AppError("refused:fit-input", `Revision ${revision.number} is not a valid model document, so it cannot be fitted.`);
+  const [reference] = await conn
+    .select()
+    .from(referenceBandSets)
+    .where(and(eq(referenceBandSets.id, referenceSetId), eq(referenceBandSets.proposalId, proposalId)));
+  if (!reference) {
+    throw new AppError("invalid:input", "That reference band set is not attached to this proposal.", { referenceSetId: ["Choose one of this proposal's reference sets."] });
+  }
+  const familyCuratorIds = await getFamilyCuratorIds(conn, proposal.familyId);
+  const assignedReviewerIds = await getAssignedReviewerIds(conn, proposal.id);
+  return {
+    proposal,
+    facts: { stage: proposal.stage, authorId: proposal.authorId, familyCuratorIds, assignedReviewerIds },
+    revision,
+    document: parsed.doc,
+    reference,
+    parsedReference: reference.parsed as StoredReference,
+  };
+}
+
+/** The preview doubles as the input check: anything the engine would refuse is refused here, before a job exists. */
+export function checkedPreview(ctx: FitContext, spec: Parameters<typeof buildFitPreview>[2]): FitPreview {
+  try {
+    return buildFitPreview(ctx.document, ctx.parsedReference, spec);
+  } catch (err) {
+    if (err instanceof FitInputError) {
+      const message = err.message.replace(/^fit: /, "");
+      throw new AppError("refused:fit-input", `This refit cannot start: ${message}.`, undefined, { reasons: [message] });
+    }
+    throw err;
+  }
+}

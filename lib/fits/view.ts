@@ -1,0 +1,67 @@
+import type { FitRunRow } from "./queries";
+import { ACTIVE_FIT_STATUSES, FIT_STATUS_LABEL, type CostPoint, type FitStatus } from "./record";
+
+/** A fit run as the pages and the API show it (JSON-safe). */
+export interface FitRunView {
+  id: string;
+  status: FitStatus;
+  statusLabel: string;
+  active: boolean;
+  startedById: string;
+  startedBy: string;
+  referenceName: string;
+  baseRevision: number;
+  resultRevision: number | null;
+  rerunOf: string | null;
+  parameters: string[];
+  iteration: number;
+  maxIterations: number;
+  cost: number | null;
+  history: CostPoint[];
+  elapsedMs: number;
+  attempts: number;
+  /** Milliseconds since the worker last wrote progress (null before it started). */
+  heartbeatAgeMs: number | null;
+  cancelRequested: boolean;
+  rms: number | null;
+  maxAbs: number | null;
+  reason: string | null;
+  applyNote: string | null;
+  failureReason: string | null;
+  createdAt: string;
+  finishedAt: string | null;
+  engineVersion: string;
+}
+
+export function fitRunView(row: FitRunRow, now = Date.now()): FitRunView {
+  const { run } = row;
+  return {
+    id: run.id,
+    status: run.status,
+    statusLabel: FIT_STATUS_LABEL[run.status],
+    active: ACTIVE_FIT_STATUSES.includes(run.status),
+    startedById: run.startedBy,
+    startedBy: row.startedByName,
+    referenceName: row.referenceName,
+    baseRevision: row.baseRevisionNumber,
+    resultRevision: row.resultRevisionNumber,
+    rerunOf: run.rerunOf,
+    parameters: run.spec.parameters.map((p) => p.key),
+    iteration: run.iteration,
+    maxIterations: run.spec.maxIterations * (run.spec.restarts + 1),
+    cost: run.cost,
+    history: run.costHistory,
+    elapsedMs: run.elapsedMs,
+    attempts: run.attempts,
+    heartbeatAgeMs: run.progressAt ? Math.max(0, now - run.progressAt.getTime()) : null,
+    cancelRequested: Boolean(run.cancelRequestedAt),
+    rms: run.outcome?.rms ?? null,
+    maxAbs: run.outcome?.maxAbs ?? null,
+    reason: run.outcome?.reason ?? null,
+    applyNote: run.applyNote,
+    failureReason: run.failureReason,
+    createdAt: run.createdAt.toISOString(),
+    finishedAt: run.finishedAt?.toISOString() ?? null,
+    engineVersion: run.engineVersion,
+  };
+}

@@ -1,0 +1,147 @@
+import "server-only";
+import { and, eq, inArray, lt, sql } from "drizzle-orm";
+import { db } from "@/db/client";
+import { fitRuns, type FitRun } from "@/db/schema";
+import { decideRevise } from "@/board/rules";
+import { getLatestRevision, getUserRoles, lockProposal } from "@/board/queries";
+import { appendRevision } from "@/board/service";
+import { recordAudit } from "@/lib/audit";
+import { AppError } from "@/lib/errors";
+import { setParameters } from "@/lib/tb/parameters";
+import { loadFitContext, type FitContext } from "./context";
+import { fitRevisionNote, statusOfOutcome, type CostPoint, type FitOutcome } from "./record";
+
+/* The worker's side of a fit run: claim, heartbeat, finish, give back for a retry, fail. No permission checks here:
+   the run was authorised when it was started. */
+
+/** Marks a waiting run as running (one more attempt); null when there is nothing to do (finished or cancelled). */
+export async function claimFit(fitId: string): Promise<FitRun | null> {
+  const [run] = await db
+    .update(fitRuns)
+    .set({ status: "running", attempts: sql`${fitRuns.attempts} + 1`, startedAt: sql`coalesce(${fitRuns.startedAt}, now())`, progressAt: new Date() })
+    .where(and(eq(fitRuns.id, fitId), inArray(fitRuns.status, ["queued", "running"])))
+    .returning();
+  if (!run) return null;
+  if (run.cancelRequestedAt) {
+    await db.update(fitRuns).set({ status: "cancelled", finishedAt: new Date() }).where(eq(fitRuns.id, fitId));
+    return null;
+  }
+  return run;
+}
+
+export function loadRunContext(run: FitRun): Promise<FitContext> {
+  return loadFitContext(db, run.proposalId, run.referenceSetId, run.baseRevisionId);
+}
+
+export interface ProgressSnapshot {
+  iteration: number;
+  cost: number | null;
+  elapsedMs: number;
+  history: CostPoint[];
+}
+
+/** The heartbeat: progress so far; answers whether someone asked to cancel, or the run is no longer this worker's. */
+export async function writeProgress(fitId: string, p: ProgressSnapshot): Promise<{ cancel: boolean; lost: boolean }> {
+  const [row] = await db
+    .update(fitRuns)
+    .set({ iteration: p.iteration, cost: p.cost, elapsedMs: Math.round(p.elapsedMs), costHistory: p.history, progressAt: new Date() })
+    .where(and(eq(fitRuns.id, fitId), eq(fitRuns.status, "running")))
+    .returning({ cancelRequestedAt: fitRuns.cancelRequestedAt });
+  return { cancel: Boolean(row?.cancelRequestedAt), lost: !row };
+}
+
+const NOT_SAVED: Record<FitOutcome["status"], string> = {
+  converged: "",
+  "not converged": "The fit did not converge, so its best point was not saved as a revision. Save it by hand if it is good enough.",
+  cancelled: "The fit was cancelled; its best point so far can be saved as a revision by hand.",
+};
+
+/**
+ * Stores the outcome and, for a converged fit that is not a re-run, saves it as the next revision — but only when
+ * nobody saved another revision meanwhile and the author may still revise. Otherwise the note says why not, and the
+ * author may save it by hand (nothing is overwritten silently).
+ */
+export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcome, history: CostPoint[]): Promise<void> {
+  await db.transaction(async (tx) => {
+    const [current] = await tx.select().from(fitRuns).where(eq(fitRuns.id, run.id)).for("update");
+    if (!current || current.status !== "running") return;
+    let applyNote: string | null = NOT_SAVED[outcome.status] || null;
+    let resultRevisionId: string | null = null;
+    if (outcome.status === "converged" && run.rerunOf) applyNote = "A re-run checks that the stored fit reproduces; it is not saved as a revision.";
+    else if (outcome.status === "converged") {
+      const proposal = await lockProposal(tx, run.proposalId);
+      const latest = await getLatestRevision(tx, run.proposalId);
+      const starter = await getUserRoles(tx, run.startedBy);
+      if (!proposal || !starter) applyNote = "The proposal or its author no longer exists.";
+      else if (latest?.id !== run.baseRevisionId) {
+        applyNote = `Revision ${latest?.number} was saved while this fit ran (it started from revision ${ctx.revision.number}), so the result was not saved over it. Save it by hand to make it the next revision.`;
+      } else {
+        const decision = decideRevise(starter, proposal);
+        if (!decision.allowed) applyNote = `Not saved as a revision: ${decision.reasons.join(" ")}`;
+        else {
+          const doc = setParameters(ctx.document, Object.fromEntries(outcome.names.map((k, i) => [k, outcome.values[i]])));
+          try {
+            const saved = await tx.transaction((sp) => appendRevision(sp, starter, proposal, doc, fitRevisionNote(outcome, ctx.reference.name, run.id), { fit: run.id }));
+            resultRevisionId = saved.revisionId;
+          } catch (err) {
+            if (!(err instanceof AppError)) throw err;
+            applyNote = `Not saved as a revision: ${err.message}`;
+          }
+        }
+      }
+    }
+    await tx
+      .update(fitRuns)
+      .set({
+        status: statusOfOutcome(outcome),
+        outcome,
+        costHistory: history,
+        iteration: outcome.iterations,
+        cost: outcome.cost,
+        elapsedMs: Math.round(outcome.elapsedMs),
+        progressAt: new Date(),
+        finishedAt: new Date(),
+        resultRevisionId,
+        applyNote,
+      })
+      .where(eq(fitRuns.id, run.id));
+    await recordAudit(tx, {
+      actorId: null,
+      action: "fit.finished",
+      subjectType: "proposal",
+      subjectId: run.proposalId,
+      after: { fit: run.id, status: outcome.status, rms: outcome.rms, iterations: outcome.iterations, savedAsRevision: Boolean(resultRevisionId) },
+    });
+  });
+}
+
+/** A failed attempt that will be retried: back to waiting, with the reason kept. */
+export async function releaseForRetry(fitId: string, reason: string): Promise<void> {
+  await db
+    .update(fitRuns)
+    .set({ status: "queued", failureReason: reason })
+    .where(and(eq(fitRuns.id, fitId), eq(fitRuns.status, "running")));
+}
+
+export async function failFit(fitId: string, reason: string): Promise<void> {
+  await db.transaction(async (tx) => {
+    const [run] = await tx
+      .update(fitRuns)
+      .set({ status: "failed", failureReason: reason, finishedAt: new Date() })
+      .where(and(eq(fitRuns.id, fitId), inArray(fitRuns.status, ["queued", "running"])))
+      .returning({ proposalId: fitRuns.proposalId });
+    if (run) await recordAudit(tx, { actorId: null, action: "fit.failed", subjectType: "proposal", subjectId: run.proposalId, after: { fit: fitId, reason } });
+  });
+}
+
+/**
+ * Runs whose worker stopped writing its heartbeat (it died or lost the database) are given back: the caller fails
+ * their pg-boss jobs, which pg-boss then retries or, with no retries left, moves to the dead-letter queue.
+ */
+export async function takeStalledFits(staleAfterMs: number): Promise<{ id: string; attempts: number }[]> {
+  return db
+    .update(fitRuns)
+    .set({ status: "queued", failureReason: sql`'attempt ' || ${fitRuns.attempts} || ': the worker stopped responding (no progress since ' || to_char(${fitRuns.progressAt} at time zone 'UTC', 'HH24:MI:SS') || ' UTC)'` })
+    .where(and(eq(fitRuns.status, "running"), lt(fitRuns.progressAt, new Date(Date.now() - staleAfterMs))))
+    .returning({ id: fitRuns.id, attempts: fitRuns.attempts });
+}
