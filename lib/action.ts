@@ -1,7 +1,9 @@
 import "server-only";
 import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
-import { AppError, type ErrorCode } from "./errors";
+import { AppError, fieldErrorsOf, type ErrorCode } from "./errors";
+
+export { fieldErrorsOf };
 import { requireRole, requireUser } from "./auth/guard";
 import type { Role } from "./auth/roles";
 import type { SessionUser } from "./auth/session-user";
@@ -19,15 +21,6 @@ export function formDataToObject(form: FormData): Record<string, unknown> {
     if (key.startsWith("$ACTION")) continue;
     const all = form.getAll(key).filter((v): v is string => typeof v === "string");
     out[key] = all.length > 1 ? all : all[0];
-  }
-  return out;
-}
-
-export function fieldErrorsOf(error: z.ZodError): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join(".") || "_form";
-    (out[key] ??= []).push(issue.message);
   }
   return out;
 }

@@ -55,3 +55,13 @@ export function toErrorResponse(err: unknown): { body: ErrorBody; status: number
   console.error("[bandgate] unexpected error", err);
   return { body: { error: { code: "internal:error", message: "Something went wrong on our side." } }, status: 500 };
 }
+
+/** zod issues as field → messages (the form and API error shape). */
+export function fieldErrorsOf(error: { issues: readonly { path: readonly PropertyKey[]; message: string }[] }): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.map(String).join(".") || "_form";
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}

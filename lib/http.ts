@@ -1,7 +1,6 @@
 import "server-only";
 import { z } from "zod";
-import { fieldErrorsOf } from "./action";
-import { AppError, toErrorResponse } from "./errors";
+import { AppError, fieldErrorsOf, toErrorResponse } from "./errors";
 
 /** The JSON body, unvalidated (for services that validate it themselves); bad JSON is a 400. */
 export async function readJsonBody(request: Request): Promise<unknown> {

@@ -1,12 +1,7 @@
-/** Deterministic noise for synthetic references: mulberry32 generator + Box–Muller transform (Box & Muller, Ann. Math. Stat. 29, 610 (1958)). */
+import { seededUniform } from "@/lib/tb/analysis/fit-document";
+
+/** Deterministic noise for synthetic references: the engine's seeded uniform generator + Box–Muller transform (Box & Muller, Ann. Math. Stat. 29, 610 (1958)). */
 export function seededNormal(seed: number): () => number {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const uniform = seededUniform(seed);
   return () => Math.sqrt(-2 * Math.log(1 - uniform())) * Math.cos(2 * Math.PI * uniform());
 }

@@ -1,0 +1,70 @@
+import { randomUUID } from "node:crypto";
+import { eq } from "drizzle-orm";
+import { createProposal, saveRevision } from "@/board/service";
+import { uploadReferenceBands } from "@/board/reference-upload";
+import { db } from "@/db/client";
+import { familyCurators, fitRuns, modelFamilies, releases } from "@/db/schema";
+import { documentHash, physicsHash } from "@/lib/tb/canonical";
+import { computeBands } from "@/lib/tb/bands";
+import type { ModelDocument } from "@/lib/tb/document";
+import { samplePath } from "@/lib/tb/kpath";
+import { compileModel } from "@/lib/tb/model";
+import { setParameters } from "@/lib/tb/parameters";
+import { versionOf } from "@/tests/support/board-fixtures";
+import { createPerson } from "@/tests/support/people";
+import { seededNormal } from "@/tests/unit/tb/analysis/seeded-noise";
+
+/** A family whose release is `truth`, its curator, an author and a reviewer. */
+export async function createFitWorld(truth: ModelDocument) {
+  const curator = await createPerson(["curator"]);
+  const slug = `fit-${randomUUID().slice(0, 8)}`;
+  const [family] = await db
+    .insert(modelFamilies)
+    .values({ slug, title: `Family ${slug}`, description: "test", dimension: truth.lattice.dimension, acceptanceCriteria: [], requiredAccepts: 1 })
+    .returning({ id: modelFamilies.id });
+  await db.insert(familyCurators).values({ familyId: family.id, userId: curator.id });
+  const [release] = await db
+    .insert(releases)
+    .values({ familyId: family.id, version: "1.0.0", document: truth, sha256: documentHash(truth), physicsHash: physicsHash(truth), changelog: "fixture" })
+    .returning({ id: releases.id });
+  return { slug, releaseId: release.id, curator, author: await createPerson(["author"]), reviewer: await createPerson(["reviewer"]), stranger: await createPerson(["consumer"]) };
+}
+export type FitWorld = Awaited<ReturnType<typeof createFitWorld>>;
+
+/**
+ * Synthetic reference bands in the upload's JSON form: the bands of `truth` on its default path (pointsTotal
+ * points) plus seeded Gaussian noise of `sigma` eV, so the test knows the parameters behind them.
+ */
+export function syntheticReference(truth: ModelDocument, sigma: number, seed: number, pointsTotal?: number): string {
+  const path = samplePath(truth, pointsTotal);
+  const bands = computeBands(compileModel(truth), path.kFrac).energies;
+  const noise = seededNormal(seed);
+  return JSON.stringify({
+    format: "bandgate-reference-bands",
+    version: 1,
+    energyUnit: "eV",
+    k: { kind: "index", values: path.kFrac.map((_, i) => i) },
+    energies: bands.map((row) => Array.from(row, (e) => e + sigma * noise())),
+  });
+}
+
+/** A draft proposal whose latest revision has `start` values, with a synthetic reference set attached. */
+export async function proposalToFit(world: FitWorld, truth: ModelDocument, start: Record<string, number>, reference: string, pointsTotal?: number) {
+  const { proposalId } = await createProposal(world.author, { familySlug: world.slug, baseReleaseId: world.releaseId, title: "Refit fixture", rationale: "" });
+  const doc = setParameters(truth, start);
+  const withPath = pointsTotal ? { ...doc, kPath: { ...doc.kPath, pointsTotal } } : doc;
+  await saveRevision(world.author, { proposalId, version: await versionOf(proposalId), document: withPath, note: "start values" });
+  const { referenceId } = await uploadReferenceBands(world.author, {
+    proposalId,
+    name: "synthetic bands",
+    fileName: "synthetic.json",
+    content: reference,
+    provenance: { method: "synthetic: bands of known parameters plus seeded noise", code: "test fixture", structureSource: "the model's own lattice" },
+  });
+  return { proposalId, referenceId };
+}
+
+export async function fitRow(fitId: string) {
+  const [row] = await db.select().from(fitRuns).where(eq(fitRuns.id, fitId));
+  return row;
+}
