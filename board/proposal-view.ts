@@ -5,6 +5,7 @@ import { modelFamilies, proposals, releases, reviewerAssignments, revisions, use
 import type { SessionUser } from "@/lib/auth/session-user";
 import type { CheckResult } from "@/lib/tb/analysis/check-result";
 import { loadProposalFacts } from "./facts";
+import { decideRerunFit, decideStartFit } from "./fit-rules";
 import { getBoardCard, listReferenceSets } from "./queries";
 import { parseDocument } from "./revision-facts";
 import { decideManageReviewers, decideRevise, decideWaiveChecks, isFamilyCurator, moveHints, type MoveHint, type ProposalFacts } from "./rules";
@@ -65,6 +66,8 @@ export async function getProposalView(proposalId: string, viewer: SessionUser) {
       waive: facts.checksRun && !facts.checksPassing && !facts.checksWaived && can(decideWaiveChecks(viewer, facts, "x".repeat(10))),
       giveVerdict: facts.stage === "under_review" && facts.assignedReviewerIds.includes(viewer.id) && viewer.id !== facts.authorId,
       curate: isFamilyCurator(viewer, facts),
+      startFit: can(decideStartFit(viewer, facts, 0)),
+      rerunFit: can(decideRerunFit(viewer, facts, 0)),
     },
   };
 }

@@ -11,12 +11,12 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { enqueueFit, jobQueue } from "@/lib/jobs/boss";
 import { QUEUES } from "@/lib/jobs/queues";
-import { setParameters } from "@/lib/tb/parameters";
 import { TB_ENGINE_VERSION } from "@/lib/tb/version";
 import { checkedPreview, loadFitContext } from "./context";
 import type { FitPreview } from "./preview";
 import { countActiveFits, getFitRun } from "./queries";
 import { fitRevisionNote } from "./record";
+import { fittedDocument } from "./result-document";
 import { fitSpecSchema, type FitSpec } from "./spec";
 
 export function parseFitSpec(input: unknown): FitSpec {
@@ -144,7 +144,7 @@ export async function applyFit(actor: SessionUser, fitId: string, input: unknown
     }
     enforce(decideApplyFit(actor, { ...ctx.facts, stage: proposal.stage }, { status: run.status, hasOutcome: Boolean(run.outcome), resultRevision: Boolean(run.resultRevisionId), rerun: Boolean(run.rerunOf) }));
     const outcome = run.outcome as NonNullable<typeof run.outcome>;
-    const doc = setParameters(ctx.document, Object.fromEntries(outcome.names.map((k, i) => [k, outcome.values[i]])));
+    const doc = fittedDocument(ctx.document, outcome, run.spec, ctx.reference, fitId);
     const saved = await appendRevision(tx, actor, proposal, doc, fitRevisionNote(outcome, found.referenceName, fitId), { fit: fitId });
     await tx.update(fitRuns).set({ resultRevisionId: saved.revisionId, applyNote: null }).where(eq(fitRuns.id, fitId));
     return { revision: saved.revision, version: saved.version };

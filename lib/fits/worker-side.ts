@@ -7,8 +7,8 @@ import { getLatestRevision, getUserRoles, lockProposal } from "@/board/queries";
 import { appendRevision } from "@/board/service";
 import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/errors";
-import { setParameters } from "@/lib/tb/parameters";
 import { loadFitContext, type FitContext } from "./context";
+import { fittedDocument } from "./result-document";
 import { fitRevisionNote, statusOfOutcome, type CostPoint, type FitOutcome } from "./record";
 
 /* The worker's side of a fit run: claim, heartbeat, finish, give back for a retry, fail. No permission checks here:
@@ -79,7 +79,7 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
         const decision = decideRevise(starter, proposal);
         if (!decision.allowed) applyNote = `Not saved as a revision: ${decision.reasons.join(" ")}`;
         else {
-          const doc = setParameters(ctx.document, Object.fromEntries(outcome.names.map((k, i) => [k, outcome.values[i]])));
+          const doc = fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id);
           try {
             const saved = await tx.transaction((sp) => appendRevision(sp, starter, proposal, doc, fitRevisionNote(outcome, ctx.reference.name, run.id), { fit: run.id }));
             resultRevisionId = saved.revisionId;
