@@ -53,6 +53,9 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
         <Link href={`/proposals/${proposal.id}/review`} className="mt-3 inline-block rounded-md border border-copper px-3 py-1.5 text-sm font-semibold text-copper-deep hover:bg-copper-pale">
           Open the review workspace: diff, bands, remarks →
         </Link>
+        <Link href={`/proposals/${proposal.id}/fit`} className="ml-3 mt-3 inline-block rounded-md border border-rule px-3 py-1.5 text-sm font-semibold hover:bg-paper-deep">
+          {may.startFit ? "Refit to reference bands →" : "Refits →"}
+        </Link>
       </ProposalHeading>
       <div className="grid gap-8 lg:grid-cols-2 xl:grid-cols-[1fr_20rem_22rem]">
         <div className="min-w-0 space-y-8">
