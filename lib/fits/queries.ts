@@ -49,3 +49,8 @@ export async function countActiveFits(conn: Conn, userId: string): Promise<numbe
     .where(and(eq(fitRuns.startedBy, userId), inArray(fitRuns.status, [...ACTIVE_FIT_STATUSES])));
   return row?.n ?? 0;
 }
+
+/** Re-runs of a stored fit (reproducibility checks), newest first. */
+export async function listReruns(conn: Conn, fitId: string) {
+  return selectRuns(conn).where(eq(fitRuns.rerunOf, fitId)).orderBy(desc(fitRuns.createdAt));
+}

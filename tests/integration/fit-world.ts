@@ -1,18 +1,22 @@
 import { randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
+import { readFileSync } from "node:fs";
+import { count, eq } from "drizzle-orm";
 import { createProposal, saveRevision } from "@/board/service";
 import { uploadReferenceBands } from "@/board/reference-upload";
 import { db } from "@/db/client";
 import { familyCurators, fitRuns, modelFamilies, releases } from "@/db/schema";
+import { FINAL_FIT_STATUSES } from "@/lib/fits/record";
 import { documentHash, physicsHash } from "@/lib/tb/canonical";
 import { computeBands } from "@/lib/tb/bands";
-import type { ModelDocument } from "@/lib/tb/document";
+import { parseModelDocument, type ModelDocument } from "@/lib/tb/document";
 import { samplePath } from "@/lib/tb/kpath";
 import { compileModel } from "@/lib/tb/model";
 import { setParameters } from "@/lib/tb/parameters";
 import { versionOf } from "@/tests/support/board-fixtures";
+import { appUrl, HttpSession } from "@/tests/support/http-session";
 import { createPerson } from "@/tests/support/people";
 import { seededNormal } from "@/tests/unit/tb/analysis/seeded-noise";
+import { waitFor } from "./registry-world";
 
 /** A family whose release is `truth`, its curator, an author and a reviewer. */
 export async function createFitWorld(truth: ModelDocument) {
@@ -67,4 +71,36 @@ export async function proposalToFit(world: FitWorld, truth: ModelDocument, start
 export async function fitRow(fitId: string) {
   const [row] = await db.select().from(fitRuns).where(eq(fitRuns.id, fitId));
   return row;
+}
+
+export async function fitRunCount(proposalId: string): Promise<number> {
+  const [row] = await db.select({ n: count() }).from(fitRuns).where(eq(fitRuns.proposalId, proposalId));
+  return row.n;
+}
+
+/** Polls the record until the run reached a final status. */
+export function finishedFit(fitId: string, seconds = 25) {
+  return waitFor(`fit ${fitId} to finish`, async () => {
+    const row = await fitRow(fitId);
+    return FINAL_FIT_STATUSES.includes(row.status) && row;
+  }, seconds);
+}
+
+/** Signed in over HTTP as a browser would be. */
+export async function signedIn(person: { email: string; password: string }): Promise<HttpSession> {
+  const session = new HttpSession(appUrl());
+  const error = await session.signIn(person.email, person.password);
+  if (error) throw new Error(`sign-in of ${person.email} failed: ${error}`);
+  return session;
+}
+
+/** The five parameters of the s + pz chain (pp_pi has no effect along the axis and stays fixed). */
+export const CHAIN_KEYS = ["onsite/A/s", "onsite/A/pz", "shell/A-A/1/ss_sigma", "shell/A-A/1/sp_sigma", "shell/A-A/1/pp_sigma"];
+
+/** Start values off the chain's truth (ε_s −5, sp_sigma 1.8, pp_sigma 2.6) by +0.4, −0.4 and +0.3 eV. */
+export const CHAIN_START = { "onsite/A/s": -4.6, "shell/A-A/1/sp_sigma": 1.4, "shell/A-A/1/pp_sigma": 2.9 };
+
+/** The demo diamond-lattice sp3s* model (one species, nearest neighbours, invented values). */
+export function diamondDocument(): ModelDocument {
+  return parseModelDocument(JSON.parse(readFileSync("db/seed/models/demo-diamond-sp3s.json", "utf8")));
 }

@@ -21,6 +21,7 @@ import { Section } from "../section";
 import { StagePanel } from "../stage-panel";
 import { BandPanel } from "./band-panel";
 import { ChecksGatePanel } from "./checks-gate-panel";
+import { FitOriginSection } from "./fit-origin-panel";
 import { MetricsTable } from "./metrics-table";
 import { ParameterDiffPanel } from "./parameter-diff-panel";
 import { RemarksPanel } from "./remarks-panel";
@@ -51,6 +52,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const bandView = buildBandView(latestDocument, baseDocument, references);
   const metrics = buildMetrics(latestDocument, baseDocument, references[0] ?? null, { window, alignment: "vbm" });
   const remarks = await listRemarks(id);
+  const toRevision = view.revisions.find((r) => `r${r.number}` === to.value) ?? null;
   const ctx = { authorId: proposal.authorId, assignedReviewerIds: view.facts.assignedReviewerIds, familyCuratorIds: view.facts.familyCuratorIds };
   const options = [
     ...(baseDocument ? [{ value: "base", label: `base release ${view.baseVersion}` }] : []),
@@ -86,6 +88,9 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
               </div>
             </details>
           </Section>
+          {toRevision && to.doc ? (
+            <FitOriginSection proposalId={id} revisionId={toRevision.id} revisionNumber={toRevision.number} document={to.doc} />
+          ) : null}
           <Section title="What it does to the bands">
             <BandPanel data={bandView} remarkBase={base} initialWindow={window} slug={proposalSlug(proposal.title)} />
             <div className="mt-6">
