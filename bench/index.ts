@@ -3,11 +3,14 @@ import { runApiBench } from "./api";
 import { runBandsBench } from "./bands";
 import { runBoardBench } from "./board";
 import { runEigenBench } from "./eigen";
+import { runFitBench } from "./fit";
 
 /** npm run bench: every speed goal, as ratios against references measured in the same run. */
 await runEigenBench();
 console.log("");
 await runBandsBench();
+console.log("");
+await runFitBench();
 console.log("");
 await runBoardBench();
 console.log("");
