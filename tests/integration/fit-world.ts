@@ -104,3 +104,17 @@ export const CHAIN_START = { "onsite/A/s": -4.6, "shell/A-A/1/sp_sigma": 1.4, "s
 export function diamondDocument(): ModelDocument {
   return parseModelDocument(JSON.parse(readFileSync("db/seed/models/demo-diamond-sp3s.json", "utf8")));
 }
+
+/** Seven of the sp3s* model's parameters (its s*–s and s*–s* integrals are zero and stay fixed). */
+export const DIAMOND_KEYS = ["onsite/X/s", "onsite/X/s*", "shell/X-X/1/ss_sigma", "shell/X-X/1/sp_sigma", "shell/X-X/1/pp_sigma", "shell/X-X/1/pp_pi", "shell/X-X/1/s*p_sigma"];
+
+/** Start values 0.1–0.3 eV off the demo diamond's. */
+export const DIAMOND_START = {
+  "onsite/X/s": -3.7,
+  "onsite/X/s*": 6.8,
+  "shell/X-X/1/ss_sigma": -1.7,
+  "shell/X-X/1/sp_sigma": 2.6,
+  "shell/X-X/1/pp_sigma": 2.8,
+  "shell/X-X/1/pp_pi": -1.0,
+  "shell/X-X/1/s*p_sigma": 2.1,
+};
