@@ -4,7 +4,7 @@ import { count, eq } from "drizzle-orm";
 import { createProposal, saveRevision } from "@/board/service";
 import { uploadReferenceBands } from "@/board/reference-upload";
 import { db } from "@/db/client";
-import { familyCurators, fitRuns, modelFamilies, releases } from "@/db/schema";
+import { familyCurators, fitRuns, modelFamilies, releases, revisions } from "@/db/schema";
 import { FINAL_FIT_STATUSES } from "@/lib/fits/record";
 import { documentHash, physicsHash } from "@/lib/tb/canonical";
 import { computeBands } from "@/lib/tb/bands";
@@ -71,6 +71,23 @@ export async function proposalToFit(world: FitWorld, truth: ModelDocument, start
 export async function fitRow(fitId: string) {
   const [row] = await db.select().from(fitRuns).where(eq(fitRuns.id, fitId));
   return row;
+}
+
+export async function revisionCount(proposalId: string): Promise<number> {
+  const [row] = await db.select({ n: count() }).from(revisions).where(eq(revisions.proposalId, proposalId));
+  return row.n;
+}
+
+export async function revisionDocument(revisionId: string) {
+  const [row] = await db.select().from(revisions).where(eq(revisions.id, revisionId));
+  return { row, doc: parseModelDocument(row.document) };
+}
+
+/** Starts a refit over HTTP; anything but 202 throws with the answer. */
+export async function startFitOverHttp(session: HttpSession, proposalId: string, body: unknown): Promise<string> {
+  const res = await session.json(`/api/proposals/${proposalId}/fits`, "POST", body);
+  if (res.status !== 202) throw new Error(`starting the refit answered ${res.status}: ${await res.text()}`);
+  return ((await res.json()) as { fitId: string }).fitId;
 }
 
 export async function fitRunCount(proposalId: string): Promise<number> {

@@ -2,15 +2,31 @@ import { eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { uploadReferenceBands } from "@/board/reference-upload";
 import { closeDb, db } from "@/db/client";
-import { referenceBandSets, revisions } from "@/db/schema";
+import { referenceBandSets } from "@/db/schema";
 import type { FitOutcome } from "@/lib/fits/record";
 import type { FitRunView } from "@/lib/fits/view";
-import { parseModelDocument } from "@/lib/tb/document";
 import { samplePath } from "@/lib/tb/kpath";
 import { getParameter } from "@/lib/tb/parameters";
 import { chainDocument, versionOf } from "../support/board-fixtures";
 import type { HttpSession } from "../support/http-session";
-import { CHAIN_KEYS, CHAIN_START, createFitWorld, finishedFit, fitRow, fitRunCount, proposalToFit, signedIn, syntheticReference } from "./fit-world";
+import {
+  CHAIN_KEYS,
+  CHAIN_START,
+  createFitWorld,
+  DIAMOND_KEYS,
+  DIAMOND_START,
+  diamondDocument,
+  finishedFit,
+  fitRow,
+  fitRunCount,
+  proposalToFit,
+  revisionCount,
+  revisionDocument,
+  signedIn,
+  startFitOverHttp,
+  syntheticReference,
+} from "./fit-world";
+import { waitFor } from "./registry-world";
 
 afterAll(closeDb);
 
@@ -19,26 +35,19 @@ const truth = chainDocument();
 const PROVENANCE = { method: "synthetic", code: "test fixture", structureSource: "the model's own lattice" };
 const chainSpec = (referenceSetId: string, extra: Record<string, unknown> = {}) => ({ referenceSetId, parameters: CHAIN_KEYS.map((key) => ({ key })), ...extra });
 
+/** A proposal of the demo sp3s* model whose reference has `points` k-points (fit time grows with it). */
+async function diamondProposal(points: number) {
+  const diamond = diamondDocument();
+  const world = await createFitWorld(diamond);
+  const { proposalId, referenceId } = await proposalToFit(world, diamond, DIAMOND_START, syntheticReference(diamond, 0.003, 3, points), points);
+  return { proposalId, author: await signedIn(world.author), spec: { referenceSetId: referenceId, parameters: DIAMOND_KEYS.map((key) => ({ key })) } };
+}
+
 async function chainProposal(seed = 11) {
   const world = await createFitWorld(truth);
   const reference = syntheticReference(truth, SIGMA, seed);
   const { proposalId, referenceId } = await proposalToFit(world, truth, CHAIN_START, reference);
   return { world, proposalId, referenceId, reference, author: await signedIn(world.author) };
-}
-
-async function startFit(session: HttpSession, proposalId: string, body: unknown): Promise<string> {
-  const res = await session.json(`/api/proposals/${proposalId}/fits`, "POST", body);
-  expect(res.status, await res.clone().text()).toBe(202);
-  return ((await res.json()) as { fitId: string }).fitId;
-}
-
-async function revisionCount(proposalId: string): Promise<number> {
-  return (await db.select({ id: revisions.id }).from(revisions).where(eq(revisions.proposalId, proposalId))).length;
-}
-
-async function revisionDocument(revisionId: string) {
-  const [row] = await db.select().from(revisions).where(eq(revisions.id, revisionId));
-  return { row, doc: parseModelDocument(row.document) };
 }
 
 /**
@@ -59,7 +68,7 @@ describe("refit of the s + pz chain over HTTP", () => {
 
   it("recovers the five parameters behind synthetic bands within 3 standard errors and saves them as the next revision", async () => {
     const { world, proposalId, referenceId, reference, author } = await chainProposal();
-    const fitId = await startFit(author, proposalId, chainSpec(referenceId));
+    const fitId = await startFitOverHttp(author, proposalId, chainSpec(referenceId));
     const row = await finishedFit(fitId);
     const { fit, outcome } = (await (await author.fetch(`/api/fits/${fitId}`)).json()) as { fit: FitRunView; outcome: FitOutcome };
     expect(fit.status, fit.failureReason ?? "").toBe("converged");
@@ -196,7 +205,7 @@ describe("refit input, preview and roles", () => {
     expect(await code(await consumer.fetch(`/api/proposals/${proposalId}/fits`))).toEqual([403, "forbidden:role"]);
     expect((await reviewer.fetch(`/api/proposals/${proposalId}/fits`)).status).toBe(200);
 
-    const fitId = await startFit(author, proposalId, chainSpec(referenceId));
+    const fitId = await startFitOverHttp(author, proposalId, chainSpec(referenceId));
     expect(await code(await curator.json(`/api/fits/${fitId}/cancel`, "POST", {}))).toEqual([403, "forbidden:fit"]);
     expect((await fitRow(fitId)).cancelRequestedAt).toBeNull();
     expect((await finishedFit(fitId)).status).toBe("converged");
@@ -209,5 +218,82 @@ describe("refit input, preview and roles", () => {
     expect(await code(await author.json(`/api/fits/${fitId}/apply`, "POST", { version: version - 1 }))).toEqual([409, "conflict:stale"]);
     expect(await versionOf(proposalId)).toBe(version);
     expect(await fitRunCount(proposalId)).toBe(2);
+  });
+});
+
+describe("refit lifecycle", () => {
+  it("cancels a running fit within seconds, keeping its best point and saving no revision", async () => {
+    // 3000 k-points and four restarts keep the fit busy for well over ten seconds (measured: about 3 s per start).
+    const { proposalId, author, spec } = await diamondProposal(3000);
+    const before = await revisionCount(proposalId);
+    const fitId = await startFitOverHttp(author, proposalId, { ...spec, restarts: 4 });
+    await waitFor("the fit's first iteration", async () => {
+      const run = await fitRow(fitId);
+      return run.status === "running" && run.iteration >= 1;
+    });
+    const res = await author.json(`/api/fits/${fitId}/cancel`, "POST", {});
+    expect([res.status, await res.json()]).toEqual([200, { status: "running" }]);
+    const row = await finishedFit(fitId, 5);
+    expect(row.status).toBe("cancelled");
+    expect((row.finishedAt as Date).getTime() - (row.cancelRequestedAt as Date).getTime()).toBeLessThan(5000);
+    const outcome = row.outcome as FitOutcome;
+    expect(outcome.status).toBe("cancelled");
+    expect(outcome.start).toEqual(DIAMOND_KEYS.map((k) => DIAMOND_START[k as keyof typeof DIAMOND_START]));
+    expect(outcome.values).not.toEqual(outcome.start);
+    expect(outcome.cost).toBeLessThanOrEqual(row.costHistory[0][1]);
+    expect(row.resultRevisionId).toBeNull();
+    expect(row.applyNote).toMatch(/cancelled; its best point so far can be saved as a revision by hand/);
+    expect(await revisionCount(proposalId)).toBe(before);
+  });
+
+  it("ends a fit cut off after one iteration as not converged with its best point, which the author then saves by hand", async () => {
+    const { proposalId, referenceId, reference, author } = await chainProposal();
+    const fitId = await startFitOverHttp(author, proposalId, chainSpec(referenceId, { maxIterations: 1 }));
+    const row = await finishedFit(fitId);
+    expect(row.status).toBe("not_converged");
+    const outcome = row.outcome as FitOutcome;
+    expect([outcome.iterations, outcome.reason]).toEqual([1, "no convergence in 1 iterations"]);
+    expect(outcome.values).not.toEqual(outcome.start);
+    // The cost at the start values, from the analytic bands: one accepted step must have lowered it.
+    const start = { ...Object.fromEntries(CHAIN_KEYS.map((k) => [k, getParameter(truth, k)])), ...CHAIN_START };
+    const kFrac = samplePath(truth).kFrac;
+    const energies = (JSON.parse(reference) as { energies: number[][] }).energies;
+    const startCost = energies.reduce((acc, row, k) => acc + analyticChainBands(start, kFrac[k][0]).reduce((a, e, b) => a + 0.5 * (e - row[b]) ** 2, 0), 0);
+    expect(outcome.cost).toBeLessThan(startCost);
+    expect(row.resultRevisionId).toBeNull();
+    expect(row.applyNote).toMatch(/did not converge, so its best point was not saved as a revision/);
+
+    const revisionsBefore = await revisionCount(proposalId);
+    const version = await versionOf(proposalId);
+    const res = await author.json(`/api/fits/${fitId}/apply`, "POST", { version });
+    expect([res.status, await res.json()]).toEqual([201, { revision: revisionsBefore + 1, version: version + 1 }]);
+    const after = await fitRow(fitId);
+    expect(after.applyNote).toBeNull();
+    const saved = await revisionDocument(after.resultRevisionId as string);
+    CHAIN_KEYS.forEach((key, i) => expect(getParameter(saved.doc, key)).toBe(outcome.values[i]));
+    expect(saved.row.note).toMatch(/not converged after 1 iterations \(best point\)/);
+  });
+
+  it("runs two fits of one proposal side by side: the first to finish becomes the revision, the other is saved by hand", async () => {
+    // 1500 k-points: each fit takes a couple of seconds (measured), longer than the worker's one-second poll.
+    const { proposalId, author, spec } = await diamondProposal(1500);
+    const ids = [await startFitOverHttp(author, proposalId, spec), await startFitOverHttp(author, proposalId, { ...spec, window: [-13, 3] })];
+    const rows = [await finishedFit(ids[0]), await finishedFit(ids[1])];
+    expect(rows.map((r) => r.status)).toEqual(["converged", "converged"]);
+    const [a, b] = rows.map((r) => ({ from: (r.startedAt as Date).getTime(), to: (r.finishedAt as Date).getTime() }));
+    expect(a.from < b.to && b.from < a.to, "the two runs overlapped in time").toBe(true);
+    const [saved, other] = rows[0].resultRevisionId ? rows : [rows[1], rows[0]];
+    expect(saved.resultRevisionId).not.toBeNull();
+    expect(other.resultRevisionId).toBeNull();
+    expect((saved.finishedAt as Date).getTime()).toBeLessThanOrEqual((other.finishedAt as Date).getTime());
+    const savedRevision = await revisionDocument(saved.resultRevisionId as string);
+    expect(other.applyNote).toMatch(new RegExp(`^Revision ${savedRevision.row.number} was saved while this fit ran \\(it started from revision ${savedRevision.row.number - 1}\\)`));
+
+    const res = await author.json(`/api/fits/${other.id}/apply`, "POST", { version: await versionOf(proposalId) });
+    expect(res.status).toBe(201);
+    expect(((await res.json()) as { revision: number }).revision).toBe(savedRevision.row.number + 1);
+    const byHand = await revisionDocument((await fitRow(other.id)).resultRevisionId as string);
+    const values = (other.outcome as FitOutcome).values;
+    DIAMOND_KEYS.forEach((key, i) => expect(getParameter(byHand.doc, key)).toBe(values[i]));
   });
 });
