@@ -7,6 +7,7 @@ import { documentHash, physicsHash } from "@/lib/tb/canonical";
 import { parseModelDocument, type ModelDocument } from "@/lib/tb/document";
 import { getParameter, setParameters } from "@/lib/tb/parameters";
 import { db } from "../client";
+import { attachDemoReference, demoRefit } from "./demo-fits";
 import { proposals, releases, users } from "../schema";
 
 /**
@@ -45,6 +46,9 @@ const CHANGES: Record<string, [string, number][]> = {
     ["shell/X-X/1/sp_sigma", 0.98],
   ],
 };
+
+/** Proposals that get invented reference bands (and, in revision, a finished refit) so a refit can be tried at once. */
+const REFERENCE_STAGES: Stage[] = ["draft", "submitted", "revision"];
 
 const STAGE_ORDER: Stage[] = ["draft", "submitted", "under_review", "revision", "accepted", "released", "declined", "withdrawn"];
 
@@ -143,7 +147,9 @@ export async function seedDemoProposals(families: { id: string; slug: string }[]
       });
       const doc = proposedDocument(baseDoc, key, factor);
       await saveRevision(people.author, { proposalId: ids.proposalId, version: await versionOf(ids.proposalId), document: doc, note: `scale ${key} by ${factor}` });
+      const referenceId = REFERENCE_STAGES.includes(stage) ? await attachDemoReference(people.author, ids.proposalId, doc, family.slug, created + 1) : null;
       await walkTo(stage, ids, people, family.id, doc);
+      if (stage === "revision" && referenceId) await demoRefit(people.author, ids.proposalId, referenceId, family.slug);
       created++;
     }
   }

@@ -48,7 +48,8 @@ async function handOver(fitId: string): Promise<void> {
   }
 }
 
-export async function startFit(actor: SessionUser, proposalId: string, input: unknown): Promise<{ fitId: string; preview: Pick<FitPreview, "points" | "kPoints" | "parameters"> }> {
+/** Records a refit after every check (rules, settings, preview); it waits for a worker until handed over. */
+export async function createFitRun(actor: SessionUser, proposalId: string, input: unknown): Promise<{ fitId: string; preview: FitPreview }> {
   const spec = parseFitSpec(input);
   const ctx = await loadFitContext(db, proposalId, spec.referenceSetId);
   enforce(decideStartFit(actor, ctx.facts, 0));
@@ -69,6 +70,11 @@ export async function startFit(actor: SessionUser, proposalId: string, input: un
     });
     return row.id;
   });
+  return { fitId, preview };
+}
+
+export async function startFit(actor: SessionUser, proposalId: string, input: unknown): Promise<{ fitId: string; preview: Pick<FitPreview, "points" | "kPoints" | "parameters"> }> {
+  const { fitId, preview } = await createFitRun(actor, proposalId, input);
   await handOver(fitId);
   return { fitId, preview: { points: preview.points, kPoints: preview.kPoints, parameters: preview.parameters } };
 }
