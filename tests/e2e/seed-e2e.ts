@@ -66,4 +66,6 @@ async function proposalAt(title: string, stage: "draft" | "submitted" | "under_r
 for (const p of E2E_PROPOSALS) await proposalAt(p.title, p.stage, "reviewers" in p ? p.reviewers : 1);
 const { seedRegistryE2E } = await import("./pages/registry-fixture");
 await seedRegistryE2E(people, base);
+const { seedRefitE2E } = await import("./pages/refit-fixture");
+await seedRefitE2E(people);
 await closeDb();
