@@ -78,7 +78,7 @@ function batchTimer(run: () => void): () => number {
   };
 }
 
-/** ms per wait for a 0 ms timeout, the yield that LM takes between iterations (mean of 10 waits). */
+/** ms per wait for a 0 ms timeout, the yield LM takes between iterations at most every 20 ms (mean of 10 waits). */
 async function timeYield(): Promise<number> {
   const t0 = performance.now();
   for (let i = 0; i < 10; i++) await new Promise<void>((resolve) => setTimeout(resolve, 0));
@@ -167,10 +167,11 @@ const perIteration = (r: Row): number => r.fitMs / r.iterations / r.bandsMs;
  * sp3s* P = 7). Common practice: LM with an exact Jacobian costs about one such evaluation per iteration; here
  * 1.2–1.5, as each rejected step costs one more and the start and end points are evaluated twice. Expected for
  * sp3s*: ≈ 1.3 × 8 ≈ 10 plus the set-up spread over the iterations; measured 10–16, up to 20 with other jobs on
- * the machine's two cores, hence ≤ 25. The chain also waits for the event loop once per iteration (Node runs a 0 ms
- * timeout after ≥ 1 ms, Node.js docs, setTimeout), 10–25 of its 0.05–0.1 ms band evaluations ("yld/band"):
- * expected ≈ 1.3 × 7 + 20 ≈ 30, measured 23–43, hence ≤ 50. The yield is a fixed time, so on a faster machine
- * this ratio grows: if it fails there, look at the yld/band column before looking for a slower engine.
+ * the machine's two cores, hence ≤ 25. LM yields to the event loop at most every 20 ms (Node runs a 0 ms timeout
+ * after ≥ 1 ms, Node.js docs, setTimeout), so a whole chain fit waits about once, 10–25 of its 0.05–0.1 ms band
+ * evaluations ("yld/band", per fit rather than per iteration since the yield was rationed): expected ≈ 1.3 × 7 + a
+ * few ≈ 15, before rationing 23–43, hence ≤ 50. The yield is a fixed time, so on a faster machine this ratio
+ * grows: if it fails there, look at the yld/band column before looking for a slower engine.
  * A fast fit that misses the truth is worthless: every fit must converge in ≤ 20 iterations (Gauss–Newton-like
  * steps on a nearly zero-residual problem from a 5–20 % start) to within 4 standard errors of every true parameter.
  */
@@ -194,7 +195,7 @@ const cell = (x: number, width: number, digits: number): string => x.toFixed(dig
 export async function runFitBench(): Promise<void> {
   console.log(`fit: Levenberg–Marquardt refit to synthetic bands (truth + ${NOISE_EV} eV seeded noise), median wall ms;`);
   console.log("band = one band evaluation (eigenvalues) at the reference k-points; eval = one fit evaluation (bands, vectors, derivatives);");
-  console.log("yld = one event-loop yield (one per iteration); max|Δp|/σ = worst |fitted − true| over its standard error");
+  console.log("yld = one event-loop yield (at most one per 20 ms of fitting); max|Δp|/σ = worst |fitted − true| over its standard error");
   console.log("model                     k  iter evals   fit ms ms/iter  band ms fit/band iter/band yld/band eval/band max|Δp|/σ");
   const rows: Row[] = [];
   for (const c of CASES) {
