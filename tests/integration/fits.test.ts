@@ -9,6 +9,7 @@ import { samplePath } from "@/lib/tb/kpath";
 import { getParameter } from "@/lib/tb/parameters";
 import { chainDocument, versionOf } from "../support/board-fixtures";
 import type { HttpSession } from "../support/http-session";
+import { createPerson } from "../support/people";
 import {
   CHAIN_KEYS,
   CHAIN_START,
@@ -197,13 +198,15 @@ describe("refit input, preview and roles", () => {
     expect(await fitRunCount(proposalId)).toBe(0);
   });
 
-  it("lets only the author start and the starter cancel, keeps the list from consumers, and refuses applying a re-run or a stale version", async () => {
+  it("lets only the proposal's author start and the starter cancel, keeps the list from consumers, and refuses applying a re-run or a stale version", async () => {
     const { world, proposalId, referenceId, author } = await chainProposal();
     const [reviewer, consumer, curator] = await Promise.all([signedIn(world.reviewer), signedIn(world.stranger), signedIn(world.curator)]);
     const code = async (res: Response) => [res.status, ((await res.json()) as { error?: { code: string } }).error?.code];
     expect(await code(await reviewer.json(`/api/proposals/${proposalId}/fits`, "POST", chainSpec(referenceId)))).toEqual([403, "forbidden:role"]);
     expect(await code(await consumer.fetch(`/api/proposals/${proposalId}/fits`))).toEqual([403, "forbidden:role"]);
     expect((await reviewer.fetch(`/api/proposals/${proposalId}/fits`)).status).toBe(200);
+    const otherAuthor = await signedIn(await createPerson(["author"]));
+    expect(await code(await otherAuthor.json(`/api/proposals/${proposalId}/fits`, "POST", chainSpec(referenceId)))).toEqual([403, "forbidden:move"]);
 
     const fitId = await startFitOverHttp(author, proposalId, chainSpec(referenceId));
     expect(await code(await curator.json(`/api/fits/${fitId}/cancel`, "POST", {}))).toEqual([403, "forbidden:fit"]);
