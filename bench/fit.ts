@@ -165,7 +165,7 @@ const perIteration = (r: Row): number => r.fitMs / r.iterations / r.bandsMs;
  * the new document + eigenvectors + P Hellmann–Feynman passes (one ∂H fill and n expectation values per k-point):
  * the "eval/band" column, measured ≈ 6–10 for both (chain P = 5, where compiling costs as much as its 2×2 solves;
  * sp3s* P = 7). Common practice: LM with an exact Jacobian costs about one such evaluation per iteration; here
- * 1.2–1.5, as each rejected step costs one more and the start and end points are evaluated twice. Expected for
+ * about 1.0–1.3, as each rejected step costs one more (start and end points are each evaluated once). Expected for
  * sp3s*: ≈ 1.3 × 8 ≈ 10 plus the set-up spread over the iterations; measured 10–16, up to 20 with other jobs on
  * the machine's two cores, hence ≤ 25. LM yields to the event loop at most every 20 ms (Node runs a 0 ms timeout
  * after ≥ 1 ms, Node.js docs, setTimeout), so a whole chain fit waits about once, 10–25 of its 0.05–0.1 ms band

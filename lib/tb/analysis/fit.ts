@@ -42,6 +42,7 @@ export async function fitBandModel(
   const t0 = Date.now();
   validateFitInput(names, start, reference, opts);
   const P = names.length;
+  model = rememberLastTwo(model);
   const first = model.evaluate(Float64Array.from(start));
   if (first.energies.length !== reference.energies.length) throw new Error("fit: the model must be evaluated at the reference k-points");
   const { pairs } = selectWeightedPairs(first.energies, reference, opts);
@@ -86,6 +87,26 @@ export function selectWeightedPairs(
     .map((p) => ({ ...p, weight: (opts.bandWeights?.[p.referenceBand] ?? 1) * (opts.pointWeights?.[p.k]?.[p.referenceBand] ?? 1) }))
     .filter((p) => p.weight > 0);
   return { shift, pairs };
+}
+
+/**
+ * The start point is evaluated for the point selection and again by the minimiser, and the best point again for the
+ * final errors (the minimiser's last evaluation may be a rejected trial): remembering the last two evaluations by
+ * value saves both repeats.
+ */
+function rememberLastTwo(model: FitModel): FitModel {
+  const kept: { p: Float64Array; value: FitEvaluation }[] = [];
+  const same = (a: Float64Array, b: Float64Array) => a.length === b.length && a.every((x, i) => Object.is(x, b[i]));
+  return {
+    evaluate(p) {
+      const hit = kept.find((k) => same(k.p, p));
+      if (hit) return hit.value;
+      const value = model.evaluate(p);
+      kept.unshift({ p: Float64Array.from(p), value });
+      kept.length = Math.min(kept.length, 2);
+      return value;
+    },
+  };
 }
 
 function bound(values: number[] | undefined, n: number, fill: number): Float64Array {

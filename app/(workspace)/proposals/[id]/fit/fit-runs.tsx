@@ -65,7 +65,7 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
       {message ? <FormMessage kind={message.kind}>{message.text}</FormMessage> : null}
       <ol className="space-y-3" aria-label="Refits of this proposal">
         {data.fits.map((f) => (
-          <li key={f.id} className="rounded-lg border border-rule bg-card p-3 text-sm" data-testid="fit-run" data-status={f.status}>
+          <li key={f.id} id={`run-${f.id}`} className="rounded-lg border border-rule bg-card p-3 text-sm target:border-copper" data-testid="fit-run" data-status={f.status}>
             <div className="flex flex-wrap items-center gap-2">
               <span className={`rounded px-2 py-0.5 text-xs font-semibold ${BADGE[f.status]}`} data-testid="fit-status">
                 {f.statusLabel}

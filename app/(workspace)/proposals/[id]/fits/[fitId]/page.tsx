@@ -19,6 +19,7 @@ import { Section } from "../../section";
 import { CorrelationMatrix } from "./correlation-matrix";
 import { FitQualityFigures } from "./fit-quality";
 import { ParameterResults } from "./parameter-results";
+import { RerunButton } from "./rerun-button";
 
 export const metadata: Metadata = { title: "Fit record" };
 export const dynamic = "force-dynamic";
@@ -171,6 +172,7 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
         </Section>
         <Section title="Reproducibility">
           {comparisons.length === 0 ? <p className="text-sm text-ink-soft">Not re-run yet. A re-run repeats this record exactly (same revision, reference, settings and seed) and must give the same values.</p> : null}
+          {view.may.rerunFit && !fit.active && run.status !== "failed" ? <RerunButton proposalId={id} fitId={run.id} /> : null}
           <ul className="space-y-1 text-sm" data-testid="fit-reproduction">
             {comparisons.map((c) => (
               <li key={c.id}>
