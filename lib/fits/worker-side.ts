@@ -67,7 +67,7 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
     if (!current || current.status !== "running") return;
     let applyNote: string | null = NOT_SAVED[outcome.status] || null;
     let resultRevisionId: string | null = null;
-    if (outcome.status === "converged" && run.rerunOf) applyNote = "A re-run checks that the stored fit reproduces; it is not saved as a revision.";
+    if (run.rerunOf) applyNote = "A re-run checks that the stored fit reproduces; it is not saved as a revision.";
     else if (outcome.status === "converged") {
       const proposal = await lockProposal(tx, run.proposalId);
       const latest = await getLatestRevision(tx, run.proposalId);
