@@ -3,14 +3,16 @@ import PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
 import { fitRuns, revisions } from "@/db/schema";
-import { FINAL_FIT_STATUSES, type FitOutcome } from "@/lib/fits/record";
+import { FINAL_FIT_STATUSES, outcomeOf, type FitOutcome } from "@/lib/fits/record";
 import { parseFitSpec } from "@/lib/fits/service";
-import { claimFit } from "@/lib/fits/worker-side";
+import { buildFitProblem } from "@/lib/fits/problem";
+import { claimFit, finishFit, loadRunContext } from "@/lib/fits/worker-side";
 import { QUEUES, type FitRunJob } from "@/lib/jobs/queues";
 import { giveBackStalledFits } from "@/lib/jobs/stalled-fits";
+import { fitDocument } from "@/lib/tb/analysis/fit-document";
 import { getParameter } from "@/lib/tb/parameters";
 import { TB_ENGINE_VERSION } from "@/lib/tb/version";
-import { chainDocument } from "../support/board-fixtures";
+import { chainDocument, versionOf } from "../support/board-fixtures";
 import {
   CHAIN_KEYS,
   CHAIN_START,
@@ -28,10 +30,24 @@ import {
 
 afterAll(closeDb);
 
+/** A chain proposal with a fit run recorded the way startFit records one (queued, no job yet), or with `extra` set. */
+async function chainRunRow(extra: Partial<typeof fitRuns.$inferInsert> = {}, settings: Record<string, unknown> = {}) {
+  const truth = chainDocument();
+  const world = await createFitWorld(truth);
+  const { proposalId, referenceId } = await proposalToFit(world, truth, CHAIN_START, syntheticReference(truth, 0.002, 21));
+  const [latest] = await db.select({ id: revisions.id }).from(revisions).where(eq(revisions.proposalId, proposalId)).orderBy(desc(revisions.number)).limit(1);
+  const spec = parseFitSpec({ referenceSetId: referenceId, parameters: CHAIN_KEYS.map((key) => ({ key })), ...settings });
+  const [run] = await db
+    .insert(fitRuns)
+    .values({ proposalId, baseRevisionId: latest.id, referenceSetId: referenceId, startedBy: world.author.id, spec, engineVersion: TB_ENGINE_VERSION, ...extra })
+    .returning();
+  return { world, proposalId, run };
+}
+
 describe("a refit of the sp3s* model through the job queue", () => {
   it("writes progress at least every second while it runs, converges, and lowers the cost at every accepted step", async () => {
     /*
-     * 2500 k-points on the fcc path and one restart: about 2.5 s per start in one thread (measured), so the run lasts
+     * 2500 k-points on the fcc path and one restart: about 3.5 s per start in the worker (measured), so the run lasts
      * several seconds. It converges (not merely stops): the reference is the model's own bands plus 3 meV noise and the
      * start is 0.1–0.3 eV off, which took about 11 iterations per start when measured, far below the 200 allowed.
      */
@@ -96,15 +112,7 @@ describe("a worker that dies holding a refit", () => {
    * fetches it with the same query a worker uses, ignoring that start time, and claims the run as runFitJob would.
    */
   async function runHeldByDeadWorker(retryLimit: number): Promise<string> {
-    const truth = chainDocument();
-    const world = await createFitWorld(truth);
-    const { proposalId, referenceId } = await proposalToFit(world, truth, CHAIN_START, syntheticReference(truth, 0.002, 21));
-    const [latest] = await db.select({ id: revisions.id }).from(revisions).where(eq(revisions.proposalId, proposalId)).orderBy(desc(revisions.number)).limit(1);
-    const spec = parseFitSpec({ referenceSetId: referenceId, parameters: CHAIN_KEYS.map((key) => ({ key })) });
-    const [run] = await db
-      .insert(fitRuns)
-      .values({ proposalId, baseRevisionId: latest.id, referenceSetId: referenceId, startedBy: world.author.id, spec, engineVersion: TB_ENGINE_VERSION })
-      .returning({ id: fitRuns.id });
+    const { run } = await chainRunRow();
     const startAfter = new Date(Date.now() + 3600_000);
     await boss.send(QUEUES.fitRun, { fitId: run.id } satisfies FitRunJob, { id: run.id, retryLimit, retryDelay: 1, expireInSeconds: 600, priority: 1000, startAfter });
     const [job] = await boss.fetch<FitRunJob>(QUEUES.fitRun, { ignoreStartAfter: true });
@@ -136,5 +144,23 @@ describe("a worker that dies holding a refit", () => {
     expect(row.attempts).toBe(1);
     expect(row.failureReason).toBe("the worker running it stopped (crash or restart) on every attempt; no retries left");
     expect(row.outcome).toBeNull();
+  });
+});
+
+describe("a re-run that stops short", () => {
+  it("is not offered for saving by hand, in its note as in the apply rule", async () => {
+    const { world, proposalId, run: original } = await chainRunRow({ status: "not_converged" }, { maxIterations: 1 });
+    const [rerun] = await db.insert(fitRuns).values({ ...original, id: undefined, rerunOf: original.id, status: "running", createdAt: undefined }).returning();
+    const ctx = await loadRunContext(rerun);
+    const problem = buildFitProblem(ctx.document, ctx.parsedReference, rerun.spec);
+    const outcome = outcomeOf(await fitDocument(ctx.document, problem.keys, problem.reference, problem.options));
+    expect(outcome.status).toBe("not converged");
+    await finishFit(rerun, ctx, outcome, []);
+    const row = await fitRow(rerun.id);
+    expect([row.status, row.resultRevisionId]).toEqual(["not_converged", null]);
+    expect(row.applyNote).toBe("A re-run checks that the stored fit reproduces; it is not saved as a revision.");
+    const author = await signedIn(world.author);
+    const res = await author.json(`/api/fits/${rerun.id}/apply`, "POST", { version: await versionOf(proposalId) });
+    expect([res.status, ((await res.json()) as { error: { code: string } }).error.code]).toEqual([422, "refused:rerun"]);
   });
 });

@@ -78,11 +78,12 @@ describe("refit of the s + pz chain over HTTP", () => {
      * Identifiability (analytic): H(k) above is 2×2 with trace T = (ε_s + ε_p) + 2(V_ss + V_pp)·c and determinant
      * D = (ε_s·ε_p − 4V_sp²) + 2(ε_s·V_pp + ε_p·V_ss)·c + 4(V_ss·V_pp + V_sp²)·c², c = cos ka. The two bands give T and D
      * at every k, so these five coefficients are fixed, and their Jacobian with respect to (ε_s, ε_p, V_ss, V_pp, V_sp)
-     * is non-singular at the truth (determinant 78.3, worked by hand): the parameters are determined up to the sign of V_sp
-     * and the s↔p relabelling, both far from the start. So the fit must find the truth, to within the noise.
+     * has determinant 2V_sp·[4(V_pp − V_ss)² − (ε_p − ε_s)²], at the truth 2·1.8·(4·4.0² − 6.5²) = 78.3 ≠ 0, so the
+     * parameters are determined up to the sign of V_sp and the s↔p relabelling, both far from the start. So the fit must
+     * find the truth, to within the noise.
      * 3σ: with a correct covariance σ²(JᵀJ)⁻¹ (Press et al., Numerical Recipes, 2nd ed. (1992), §15.6) each estimate lies
-     * within 3 standard errors with probability 99.7 % (Gaussian tail, common practice); the seed is fixed, so the test is
-     * deterministic, yet a biased fit or standard errors too small by a factor of ~3 would fail it.
+     * within 3 standard errors with probability 99.7 % (Gaussian errors; 3σ as the limit is common practice). The seed is
+     * fixed, so the test is deterministic, yet a biased fit or standard errors too small by a factor of ~3 would fail it.
      */
     const se = outcome.standardErrors as number[];
     CHAIN_KEYS.forEach((key, i) => {
@@ -226,7 +227,7 @@ describe("refit input, preview and roles", () => {
 
 describe("refit lifecycle", () => {
   it("cancels a running fit within seconds, keeping its best point and saving no revision", async () => {
-    // 3000 k-points and four restarts keep the fit busy for well over ten seconds (measured: about 3 s per start).
+    // 3000 k-points and four restarts keep the fit busy for well over ten seconds (measured: 2500 points take about 3.5 s per start).
     const { proposalId, author, spec } = await diamondProposal(3000);
     const before = await revisionCount(proposalId);
     const fitId = await startFitOverHttp(author, proposalId, { ...spec, restarts: 4 });
@@ -278,7 +279,7 @@ describe("refit lifecycle", () => {
   });
 
   it("runs two fits of one proposal side by side: the first to finish becomes the revision, the other is saved by hand", async () => {
-    // 1500 k-points: each fit takes a couple of seconds (measured), longer than the worker's one-second poll.
+    // 1500 k-points: each fit takes about 4 s when both run at once (measured), well over the worker's one-second poll.
     const { proposalId, author, spec } = await diamondProposal(1500);
     const ids = [await startFitOverHttp(author, proposalId, spec), await startFitOverHttp(author, proposalId, { ...spec, window: [-13, 3] })];
     const rows = [await finishedFit(ids[0]), await finishedFit(ids[1])];
