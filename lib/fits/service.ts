@@ -4,7 +4,8 @@ import { z } from "zod";
 import { db, type Tx } from "@/db/client";
 import { fitRuns } from "@/db/schema";
 import { decideApplyFit, decideCancelFit, decideRerunFit, decideStartFit } from "@/board/fit-rules";
-import { lockProposal } from "@/board/queries";
+import { getLatestRevision, lockProposal } from "@/board/queries";
+import { parseDocument } from "@/board/revision-facts";
 import { appendRevision, enforce } from "@/board/service";
 import { recordAudit } from "@/lib/audit";
 import type { SessionUser } from "@/lib/auth/session-user";
@@ -12,6 +13,7 @@ import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { enqueueFit, jobQueue } from "@/lib/jobs/boss";
 import { QUEUES } from "@/lib/jobs/queues";
 import { TB_ENGINE_VERSION } from "@/lib/tb/version";
+import { fitStillApplies } from "./apply-onto";
 import { checkedPreview, loadFitContext } from "./context";
 import type { FitPreview } from "./preview";
 import { countActiveFits, getFitRun } from "./queries";
@@ -145,12 +147,22 @@ export async function applyFit(actor: SessionUser, fitId: string, input: unknown
     const [run] = await tx.select().from(fitRuns).where(eq(fitRuns.id, fitId)).for("update");
     const proposal = await lockProposal(tx, run.proposalId);
     if (!proposal) throw new AppError("not-found:proposal", "That proposal does not exist.");
+    enforce(decideApplyFit(actor, { ...ctx.facts, stage: proposal.stage }, { status: run.status, hasOutcome: Boolean(run.outcome), resultRevision: Boolean(run.resultRevisionId), rerun: Boolean(run.rerunOf) }));
     if (proposal.version !== parsed.data.version) {
       throw new AppError("conflict:stale", `Someone changed this proposal while you were looking (it is now at version ${proposal.version}). Reload to see its current revisions.`);
     }
-    enforce(decideApplyFit(actor, { ...ctx.facts, stage: proposal.stage }, { status: run.status, hasOutcome: Boolean(run.outcome), resultRevision: Boolean(run.resultRevisionId), rerun: Boolean(run.rerunOf) }));
     const outcome = run.outcome as NonNullable<typeof run.outcome>;
-    const doc = fittedDocument(ctx.document, outcome, run.spec, ctx.reference, fitId);
+    // Saved on top of the latest revision, so its later edits (metadata, other fits' values) are kept — but only when
+    // that loses nothing: a revision that changed parameters this fit held fixed would be undone.
+    const latest = await getLatestRevision(tx, proposal.id);
+    const latestDoc = latest && latest.id !== run.baseRevisionId ? parseDocument(latest.document) : null;
+    if (latest && latestDoc && (!latestDoc.ok || !fitStillApplies(ctx.document, latestDoc.doc, outcome))) {
+      throw new AppError(
+        "refused:superseded",
+        `Revision ${latest.number} changed parameters this fit kept fixed (it started from revision ${found.baseRevisionNumber}); saving it would undo them. Start a new refit from revision ${latest.number} instead.`,
+      );
+    }
+    const doc = fittedDocument(latestDoc?.ok ? latestDoc.doc : ctx.document, outcome, run.spec, ctx.reference, fitId);
     const saved = await appendRevision(tx, actor, proposal, doc, fitRevisionNote(outcome, found.referenceName, fitId), { fit: fitId });
     await tx.update(fitRuns).set({ resultRevisionId: saved.revisionId, applyNote: null }).where(eq(fitRuns.id, fitId));
     return { revision: saved.revision, version: saved.version };

@@ -4,10 +4,12 @@ import { db } from "@/db/client";
 import { fitRuns, type FitRun } from "@/db/schema";
 import { decideRevise } from "@/board/rules";
 import { getLatestRevision, getUserRoles, lockProposal } from "@/board/queries";
+import { parseDocument } from "@/board/revision-facts";
 import { appendRevision } from "@/board/service";
 import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/errors";
 import { loadFitContext, type FitContext } from "./context";
+import { fitStillApplies } from "./apply-onto";
 import { fittedDocument } from "./result-document";
 import { fitRevisionNote, statusOfOutcome, type CostPoint, type FitOutcome } from "./record";
 
@@ -74,7 +76,13 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
       const starter = await getUserRoles(tx, run.startedBy);
       if (!proposal || !starter) applyNote = "The proposal or its author no longer exists.";
       else if (latest?.id !== run.baseRevisionId) {
-        applyNote = `Revision ${latest?.number} was saved while this fit ran (it started from revision ${ctx.revision.number}), so the result was not saved over it. Save it by hand to make it the next revision.`;
+        const later = latest ? parseDocument(latest.document) : null;
+        const keeps = later?.ok === true && fitStillApplies(ctx.document, later.doc, outcome);
+        applyNote = `Revision ${latest?.number} was saved while this fit ran (it started from revision ${ctx.revision.number}), so the result was not saved over it. ${
+          keeps
+            ? `Save it by hand to make it the next revision (revision ${latest?.number}'s other changes are kept).`
+            : `Revision ${latest?.number} also changed parameters this fit kept fixed: start a new refit from it.`
+        }`;
       } else {
         const decision = decideRevise(starter, proposal);
         if (!decision.allowed) applyNote = `Not saved as a revision: ${decision.reasons.join(" ")}`;

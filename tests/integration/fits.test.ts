@@ -1,12 +1,14 @@
-import { eq } from "drizzle-orm";
+import { desc, eq } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { uploadReferenceBands } from "@/board/reference-upload";
+import { saveRevision } from "@/board/service";
 import { closeDb, db } from "@/db/client";
-import { referenceBandSets } from "@/db/schema";
+import { referenceBandSets, revisions } from "@/db/schema";
 import type { FitOutcome } from "@/lib/fits/record";
 import type { FitRunView } from "@/lib/fits/view";
 import { samplePath } from "@/lib/tb/kpath";
-import { getParameter } from "@/lib/tb/parameters";
+import { parseModelDocument } from "@/lib/tb/document";
+import { getParameter, setParameters } from "@/lib/tb/parameters";
 import { chainDocument, versionOf } from "../support/board-fixtures";
 import type { HttpSession } from "../support/http-session";
 import { createPerson } from "../support/people";
@@ -301,3 +303,41 @@ describe("refit lifecycle", () => {
     DIAMOND_KEYS.forEach((key, i) => expect(getParameter(byHand.doc, key)).toBe(values[i]));
   });
 });
+
+describe("saving a fit by hand after the proposal moved on", () => {
+  async function latestDocument(proposalId: string) {
+    const [row] = await db.select().from(revisions).where(eq(revisions.proposalId, proposalId)).orderBy(desc(revisions.number)).limit(1);
+    return parseModelDocument(row.document);
+  }
+
+  it("refuses when a later revision changed a parameter the fit kept fixed, and keeps a later metadata-only change", async () => {
+    const { world, proposalId, referenceId, author } = await chainProposal(23);
+    const free = ["onsite/A/s", "shell/A-A/1/sp_sigma"];
+    const fitId = await startFitOverHttp(author, proposalId, { referenceSetId: referenceId, parameters: free.map((key) => ({ key })), maxIterations: 1 });
+    const outcome = (await finishedFit(fitId)).outcome as FitOutcome;
+
+    // A later revision that only rewords the description: saving the fit on top of it loses nothing and keeps the wording.
+    const reworded = { ...(await latestDocument(proposalId)), description: "reworded while the fit ran" };
+    await saveRevision(world.author, { proposalId, version: await versionOf(proposalId), document: reworded, note: "wording" });
+    const ok = await author.json(`/api/fits/${fitId}/apply`, "POST", { version: await versionOf(proposalId) });
+    expect(ok.status).toBe(201);
+    const saved = await revisionDocument((await fitRow(fitId)).resultRevisionId as string);
+    expect(saved.doc.description).toBe("reworded while the fit ran");
+    free.forEach((key, i) => expect(getParameter(saved.doc, key)).toBe(outcome.values[i]));
+
+    // A second fit from that revision, then a revision that moves pp_sigma, which the fit held fixed: refused.
+    const secondId = await startFitOverHttp(author, proposalId, { referenceSetId: referenceId, parameters: free.map((key) => ({ key })), maxIterations: 1 });
+    const second = await finishedFit(secondId);
+    const moved = setParameters(await latestDocument(proposalId), { "shell/A-A/1/pp_sigma": 2.9 });
+    moved.provenance.citations["shell/A-A/1/pp_sigma"] = "changed by hand while a fit ran";
+    await saveRevision(world.author, { proposalId, version: await versionOf(proposalId), document: moved, note: "pp_sigma by hand" });
+    const count = await revisionCount(proposalId);
+    const refused = await author.json(`/api/fits/${secondId}/apply`, "POST", { version: await versionOf(proposalId) });
+    const body = (await refused.json()) as { error: { code: string; message: string } };
+    expect([refused.status, body.error.code]).toEqual([422, "refused:superseded"]);
+    expect(body.error.message).toMatch(/changed parameters this fit kept fixed .* saving it would undo them/);
+    expect(await revisionCount(proposalId)).toBe(count);
+    expect(second.resultRevisionId).toBeNull();
+  });
+});
+

@@ -84,3 +84,16 @@ describe("cost history kept in the record", () => {
     expect(h[0][0]).toBe(1);
   });
 });
+
+describe("whether a fit may be saved on top of a later revision", () => {
+  it("yes when the later revision changed only fitted parameters or nothing physical; no when it moved a fixed one or removed a fitted one", async () => {
+    const { fitStillApplies } = await import("@/lib/fits/apply-onto");
+    const { setParameters } = await import("@/lib/tb/parameters");
+    const outcome = outcomeOf(await fitted());
+    expect(fitStillApplies(start, setParameters(start, { "shell/A-A/1/sp_sigma": 0.5 }), outcome)).toBe(true);
+    expect(fitStillApplies(start, { ...start, description: "reworded" }, outcome)).toBe(true);
+    expect(fitStillApplies(start, setParameters(start, { "shell/A-A/1/pp_sigma": 3 }), outcome)).toBe(false);
+    const withoutS = { ...start, onsite: { A: { pz: start.onsite.A.pz } } };
+    expect(fitStillApplies(start, withoutS, outcome)).toBe(false);
+  });
+});
