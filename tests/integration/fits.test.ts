@@ -211,6 +211,13 @@ describe("refit input, preview and roles", () => {
     const otherAuthor = await signedIn(await createPerson(["author"]));
     expect(await code(await otherAuthor.json(`/api/proposals/${proposalId}/fits`, "POST", chainSpec(referenceId)))).toEqual([403, "forbidden:move"]);
 
+    // Far from the optimum and cut off after one step: not converged, so not saved, so it can meet a stale version.
+    const unsaved = await startFitOverHttp(author, proposalId, chainSpec(referenceId, { maxIterations: 1 }));
+    expect((await finishedFit(unsaved)).status).toBe("not_converged");
+    const before = await versionOf(proposalId);
+    expect(await code(await author.json(`/api/fits/${unsaved}/apply`, "POST", { version: before - 1 }))).toEqual([409, "conflict:stale"]);
+    expect(await versionOf(proposalId)).toBe(before);
+
     const fitId = await startFitOverHttp(author, proposalId, chainSpec(referenceId));
     expect(await code(await curator.json(`/api/fits/${fitId}/cancel`, "POST", {}))).toEqual([403, "forbidden:fit"]);
     expect((await fitRow(fitId)).cancelRequestedAt).toBeNull();
@@ -221,9 +228,10 @@ describe("refit input, preview and roles", () => {
     await finishedFit(rerunId);
     const version = await versionOf(proposalId);
     expect(await code(await author.json(`/api/fits/${rerunId}/apply`, "POST", { version }))).toEqual([422, "refused:rerun"]);
-    expect(await code(await author.json(`/api/fits/${fitId}/apply`, "POST", { version: version - 1 }))).toEqual([409, "conflict:stale"]);
+    // Permission comes before freshness: a saved fit is refused as saved, whatever version is sent.
+    expect(await code(await author.json(`/api/fits/${fitId}/apply`, "POST", { version: version - 1 }))).toEqual([422, "refused:applied"]);
     expect(await versionOf(proposalId)).toBe(version);
-    expect(await fitRunCount(proposalId)).toBe(2);
+    expect(await fitRunCount(proposalId)).toBe(3);
   });
 });
 
@@ -328,7 +336,7 @@ describe("saving a fit by hand after the proposal moved on", () => {
     // A second fit from that revision, then a revision that moves pp_sigma, which the fit held fixed: refused.
     const secondId = await startFitOverHttp(author, proposalId, { referenceSetId: referenceId, parameters: free.map((key) => ({ key })), maxIterations: 1 });
     const second = await finishedFit(secondId);
-    const moved = setParameters(await latestDocument(proposalId), { "shell/A-A/1/pp_sigma": 2.9 });
+    const moved = setParameters(await latestDocument(proposalId), { "shell/A-A/1/pp_sigma": 2.2 });
     moved.provenance.citations["shell/A-A/1/pp_sigma"] = "changed by hand while a fit ran";
     await saveRevision(world.author, { proposalId, version: await versionOf(proposalId), document: moved, note: "pp_sigma by hand" });
     const count = await revisionCount(proposalId);
