@@ -2,7 +2,7 @@ import { uploadReferenceBands } from "@/board/reference-upload";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { createFitRun } from "@/lib/fits/service";
 import { runFitInline } from "@/lib/fits/run-inline";
-import { seededUniform } from "@/lib/tb/analysis/fit-document";
+import { seededUniform } from "@/lib/tb/analysis/seeded-uniform";
 import { computeBands } from "@/lib/tb/bands";
 import type { ModelDocument } from "@/lib/tb/document";
 import { samplePath } from "@/lib/tb/kpath";

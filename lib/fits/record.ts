@@ -1,4 +1,4 @@
-import type { BandError } from "@/lib/tb/analysis/compare-reference";
+import type { FitResult } from "@/lib/tb/analysis/fit";
 import type { DocumentFitResult, RestartOutcome } from "@/lib/tb/analysis/fit-document";
 
 /** Lifecycle of a fit run. queued → running → one of the final states; a crashed worker's run goes back to queued. */
@@ -20,25 +20,11 @@ export const FIT_STATUS_LABEL: Record<FitStatus, string> = {
 export type CostPoint = [number, number, number];
 
 /** The outcome stored in the fit record (JSON); the fitted document itself is the revision it produced. */
-export interface FitOutcome {
-  status: "converged" | "not converged" | "cancelled";
-  reason: string;
-  names: string[];
-  start: number[];
-  values: number[];
-  iterations: number;
-  cost: number;
-  /** Alignment shift at the end, added to the reference (eV). */
-  shift: number;
-  points: number;
-  rms: number;
-  maxAbs: number;
-  perBand: BandError[];
+export interface FitOutcome extends Omit<FitResult, "statistics"> {
   residualVariance: number;
   standardErrors: number[] | null;
   correlations: number[][] | null;
   starts: RestartOutcome[];
-  elapsedMs: number;
 }
 
 export function outcomeOf(result: DocumentFitResult): FitOutcome {

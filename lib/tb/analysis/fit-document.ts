@@ -7,6 +7,7 @@ import { fitBandModel, selectWeightedPairs, type FitModel, type FitResult } from
 import { FitInputError, validateFitInput, validatePointCount, type BandFitOptions } from "./fit-input";
 import type { WeightedPair } from "./fit-residuals";
 import { spinDegeneracyOf } from "./model-solver";
+import { seededUniform } from "./seeded-uniform";
 import { buildDerivativeModels, computeBandDerivatives } from "./sensitivity";
 
 /**
@@ -98,17 +99,6 @@ export function previewDocumentFit(doc: ModelDocument, keys: string[], reference
   return { start: prepared.start, shift, pairs, energies: first.energies.map((row) => Array.from(row)) };
 }
 
-/** mulberry32 (Tommy Ettinger's public-domain 32-bit generator): small, fast and the same on every platform. */
-export function seededUniform(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /**
  * A restart point: uniform within the bounds where both are finite, otherwise the start value moved by up to

@@ -1,4 +1,4 @@
-import { seededUniform } from "@/lib/tb/analysis/fit-document";
+import { seededUniform } from "@/lib/tb/analysis/seeded-uniform";
 
 /** Deterministic noise for synthetic references: the engine's seeded uniform generator + Box–Muller transform (Box & Muller, Ann. Math. Stat. 29, 610 (1958)). */
 export function seededNormal(seed: number): () => number {
