@@ -17,8 +17,8 @@ type Person = { id: string; email: string; name: string; roles: Role[] };
 
 /**
  * A 3D sp3s*-type family and a draft whose start values are off, with reference bands made from the released values
- * (exact, no noise): a refit has a known answer, and with many free parameters and extra starts it runs long enough
- * to watch and cancel.
+ * (exact, no noise) on a dense path: a refit has a known answer, and with many free parameters and extra starts it runs
+ * long enough to watch and cancel.
  */
 export async function seedRefitE2E(people: Record<string, Person>): Promise<void> {
   const [existing] = await db.select({ id: modelFamilies.id }).from(modelFamilies).where(eq(modelFamilies.slug, E2E_REFIT.slug));
@@ -37,12 +37,15 @@ export async function seedRefitE2E(people: Record<string, Person>): Promise<void
   }
   const [release] = await db.select().from(releases).where(eq(releases.familyId, familyId));
   const { proposalId } = await createProposal(people.author, { familySlug: E2E_REFIT.slug, baseReleaseId: release.id, title: E2E_REFIT.proposal, rationale: "Refit test fixture." });
-  const start = setParameters(truth, { "shell/X-X/1/sp_sigma": 2.2, "shell/X-X/1/pp_pi": -1.0, "shell/X-X/1/ss_sigma": -1.8 });
+  // 3000 k-points: one iteration with every parameter free takes a few hundred ms, so nine starts run well over ten
+  // seconds — time to watch and cancel — while three free parameters still finish in seconds.
+  const onDensePath = { ...truth, kPath: { ...truth.kPath, pointsTotal: 3000 } };
+  const start = setParameters(onDensePath, { "shell/X-X/1/sp_sigma": 2.2, "shell/X-X/1/pp_pi": -1.0, "shell/X-X/1/ss_sigma": -1.8 });
   for (const key of ["shell/X-X/1/sp_sigma", "shell/X-X/1/pp_pi", "shell/X-X/1/ss_sigma"]) start.provenance.citations[key] = "refit test start value";
   const version = async () => (await db.select({ v: proposals.version }).from(proposals).where(eq(proposals.id, proposalId)))[0].v;
   await saveRevision(people.author, { proposalId, version: await version(), document: start, note: "start values for the refit test" });
-  const path = samplePath(truth);
-  const energies = computeBands(compileModel(truth), path.kFrac).energies.map((row) => Array.from(row));
+  const path = samplePath(onDensePath);
+  const energies = computeBands(compileModel(onDensePath), path.kFrac).energies.map((row) => Array.from(row));
   await uploadReferenceBands(people.author, {
     proposalId,
     name: "Released-value bands",
