@@ -22,6 +22,8 @@ export interface FitPreview {
   /** Reference values left out by the window, the band offset or a zero weight. */
   excluded: number;
   shift: number;
+  /** Free parameters the selected values do not depend on (their uncertainty would be undetermined). */
+  insensitive: string[];
   perBand: FitPreviewBand[];
   plot: {
     distance: number[];
@@ -66,6 +68,7 @@ export function buildFitPreview(doc: ModelDocument, reference: StoredReference, 
     kPoints: new Set(preview.pairs.map((p) => p.k)).size,
     excluded: total - preview.pairs.length,
     shift: preview.shift,
+    insensitive: preview.insensitive,
     perBand: [...perBand.values()].sort((a, b) => a.referenceBand - b.referenceBand),
     plot: { distance, model: preview.energies, included: every(included), excluded: every(excluded), stride },
   };

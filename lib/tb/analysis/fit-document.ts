@@ -87,6 +87,8 @@ export interface DocumentFitPreview {
   pairs: WeightedPair[];
   /** Model bands at the reference k-points, at the start values. */
   energies: number[][];
+  /** Free parameters that move none of the fitted values at the start point (∂E/∂p = 0 there): the fit cannot determine them. */
+  insensitive: string[];
 }
 
 /** What a fit would use, without running it; refuses the same bad input as fitDocument. */
@@ -96,7 +98,9 @@ export function previewDocumentFit(doc: ModelDocument, keys: string[], reference
   const first = prepared.model.evaluate(Float64Array.from(prepared.start));
   const { shift, pairs } = selectWeightedPairs(first.energies, reference, prepared.options);
   validatePointCount(pairs.length, keys.length, opts.window);
-  return { start: prepared.start, shift, pairs, energies: first.energies.map((row) => Array.from(row)) };
+  const P = keys.length;
+  const insensitive = keys.filter((_, j) => pairs.every((p) => Math.abs(first.derivatives[p.k][p.modelBand * P + j]) < 1e-10));
+  return { start: prepared.start, shift, pairs, energies: first.energies.map((row) => Array.from(row)), insensitive };
 }
 
 

@@ -75,3 +75,13 @@ describe("preview of a fit", () => {
     expect(() => buildFitPreview(doc, off, spec({ parameters: free }))).toThrow(/does not fit this model's k-path/);
   });
 });
+
+describe("parameters the fit cannot determine", () => {
+  it("names a free parameter that no selected value depends on: pp_pi of a chain along its own axis (no π bond along z)", () => {
+    // For neighbours along ±ẑ only, E_z,z = n²V_ppσ + (1 − n²)V_ppπ with n = ±1 (Slater & Koster 1954, Table I): V_ppπ drops out.
+    const ref = storedReference(doc);
+    const v = buildFitPreview(doc, ref, spec({ parameters: [{ key: "shell/A-A/1/pp_pi" }, { key: "onsite/A/s" }] }));
+    expect(v.insensitive).toEqual(["shell/A-A/1/pp_pi"]);
+    expect(buildFitPreview(doc, ref, spec({ parameters: free })).insensitive).toEqual([]);
+  });
+});

@@ -45,6 +45,12 @@ export function FitPreviewPanel({ preview, error, loading, localErrors, window }
             <span className="num">{preview.excluded}</span> are left out. Alignment shift at the start:{" "}
             <span className="num">{preview.shift.toFixed(3)}</span> eV.
           </p>
+          {preview.insensitive.length > 0 ? (
+            <p role="note" className="mb-2 rounded-md bg-danger-pale px-3 py-2 text-sm text-danger" data-testid="fit-preview-insensitive">
+              No value in the fit depends on {preview.insensitive.join(", ")} at the start values, so the fit cannot determine{" "}
+              {preview.insensitive.length === 1 ? "it" : "them"} (no uncertainty can be given). Fix {preview.insensitive.length === 1 ? "it" : "them"}, or widen the window or bands.
+            </p>
+          ) : null}
           <FitPreviewPlot plot={preview.plot} window={window} />
           {preview.plot.stride > 1 ? <p className="text-xs text-ink-soft">Every {preview.plot.stride}th value is drawn; the counts include all.</p> : null}
           <table className="mt-3 w-full text-sm">

@@ -22,6 +22,7 @@ const BADGE: Record<FitRunView["status"], string> = {
 };
 
 function seconds(ms: number): string {
+  if (ms < 1000) return `${Math.round(ms)} ms`;
   return ms < 60_000 ? `${(ms / 1000).toFixed(1)} s` : `${Math.floor(ms / 60_000)} min ${Math.round((ms % 60_000) / 1000)} s`;
 }
 
@@ -91,7 +92,7 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
                 className="h-2 w-48 overflow-hidden rounded bg-paper-deep"
                 data-testid="fit-progress"
               >
-                <div className={`h-full ${f.active ? "bg-copper" : "bg-slate-line"}`} style={{ width: `${Math.min(100, (100 * f.iteration) / Math.max(1, f.maxIterations))}%` }} />
+                <div className={`h-full ${f.active ? "bg-copper" : "bg-slate-line"}`} style={{ width: f.active ? `${Math.min(100, (100 * f.iteration) / Math.max(1, f.maxIterations))}%` : "100%" }} />
               </div>
               <span className="num text-xs" data-testid="fit-progress-text">
                 iteration {f.iteration}
