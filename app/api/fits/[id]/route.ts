@@ -14,5 +14,11 @@ export const GET = handleRoute(async (_request: Request, { params }: { params: P
   await requireRole(...BOARD_ROLES);
   const row = await getFitRun(db, fitId);
   if (!row) throw new AppError("not-found:fit", "That refit does not exist.");
-  return Response.json({ fit: fitRunView(row), outcome: row.run.outcome, spec: row.run.spec });
+  const { run } = row;
+  return Response.json({
+    fit: fitRunView(row),
+    spec: run.spec,
+    outcome: run.outcome,
+    record: { proposalId: run.proposalId, baseRevisionId: run.baseRevisionId, referenceSetId: run.referenceSetId, engineVersion: run.engineVersion, costHistory: run.costHistory },
+  });
 });

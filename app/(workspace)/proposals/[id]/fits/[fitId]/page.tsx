@@ -107,6 +107,13 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
             <dd className="num">at most {spec.maxIterations} iterations; {spec.restarts} extra start{spec.restarts === 1 ? "" : "s"}; seed {spec.seed}</dd>
             <dt>Engine</dt>
             <dd className="num">bandgate tight-binding engine {run.engineVersion}</dd>
+            <dt>Whole record</dt>
+            <dd>
+              <a href={`/api/fits/${run.id}`} className="underline" download={`fit-${run.id.slice(0, 8)}.json`}>
+                download as JSON
+              </a>{" "}
+              (status, settings, outcome with standard errors and correlations, cost history)
+            </dd>
             <dt>Started</dt>
             <dd>
               by {row.startedByName}, {run.createdAt.toISOString().slice(0, 19).replace("T", " ")} UTC
