@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import { bigserial, boolean, index, integer, pgEnum, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
 import { RELEASE_EVENT_KINDS } from "@/lib/registry/events";
 import { modelFamilies, releases, users } from "./schema";
@@ -89,8 +90,10 @@ export const releaseEvents = pgTable(
     kind: releaseEventKindEnum("kind").notNull(),
     actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
+    /** When the worker turned the event into deliveries and e-mails; null until then (a sweep re-queues stragglers). */
+    fannedOutAt: timestamp("fanned_out_at", { withTimezone: true }),
   },
-  (t) => [index("release_events_release_idx").on(t.releaseId)],
+  (t) => [index("release_events_release_idx").on(t.releaseId), index("release_events_unsent_idx").on(t.createdAt).where(sql`fanned_out_at is null`)],
 );
 export type ReleaseEvent = typeof releaseEvents.$inferSelect;
 

@@ -3,7 +3,7 @@ import { createHash } from "node:crypto";
 import { and, eq } from "drizzle-orm";
 import type PgBoss from "pg-boss";
 import { db } from "@/db/client";
-import { familySubscriptions, users, webhookDeliveries, webhookSubscriptions } from "@/db/schema";
+import { familySubscriptions, releaseEvents, users, webhookDeliveries, webhookSubscriptions } from "@/db/schema";
 import { webhookBody } from "@/lib/registry/webhook-payload";
 import { loadEventContext } from "./event-context";
 import { QUEUES, webhookJobOptions, type RegistryMailJob } from "./queues";
@@ -17,6 +17,7 @@ function mailJobId(eventId: string, userId: string): string {
 /**
  * One release event → one signed delivery per active webhook subscription of the family and one e-mail per
  * subscriber, each its own job. Idempotent: deliveries are unique per (event, subscription) and jobs carry fixed ids.
+ * Marks the event fanned out at the end, so a sweep can tell events whose job was never queued or was lost.
  */
 export async function fanOutReleaseEvent(boss: PgBoss, eventId: string): Promise<void> {
   const ctx = await loadEventContext(eventId);
@@ -50,4 +51,5 @@ export async function fanOutReleaseEvent(boss: PgBoss, eventId: string): Promise
   for (const r of readers) {
     await boss.send(QUEUES.registryMail, { eventId, userId: r.userId } satisfies RegistryMailJob, { id: mailJobId(eventId, r.userId) });
   }
+  await db.update(releaseEvents).set({ fannedOutAt: new Date() }).where(eq(releaseEvents.id, eventId));
 }

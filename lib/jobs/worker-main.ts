@@ -10,6 +10,7 @@ import { failFit } from "@/lib/fits/worker-side";
 import { ensureQueues, QUEUES, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
 import { runFitJob } from "./run-fit";
 import { giveBackStalledFits } from "./stalled-fits";
+import { requeueUnsentReleaseEvents } from "./unsent-release-events";
 import { sendRegistryMail } from "./send-registry-mail";
 import { jobSettings } from "./settings";
 
@@ -49,6 +50,11 @@ await boss.work<FitRunJob>(QUEUES.fitRunDead, polling, async ([job]) =>
 const sweeper = setInterval(() => {
   giveBackStalledFits(boss).catch((err) => console.error("[bandgate worker] stalled-fit sweep failed", err instanceof Error ? err.message : err));
 }, 15_000);
+const resender = setInterval(() => {
+  requeueUnsentReleaseEvents(boss)
+    .then((ids) => ids.length && console.log(`[bandgate worker] re-queued ${ids.length} release event(s) that were never fanned out`))
+    .catch((err) => console.error("[bandgate worker] release-event sweep failed", err instanceof Error ? err.message : err));
+}, 60_000);
 console.log(`[bandgate worker] taking jobs (${fitSlots} refit slots)`);
 
 let stopping = false;
@@ -56,6 +62,7 @@ async function stop() {
   if (stopping) return;
   stopping = true;
   clearInterval(sweeper);
+  clearInterval(resender);
   shutdown.abort();
   await boss.stop({ graceful: true, timeout: 10_000, wait: true });
   await closeDb();
