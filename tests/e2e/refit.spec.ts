@@ -40,4 +40,15 @@ test("an author starts a refit, watches it advance, cancels it, lets another fin
   const revisions = page.getByRole("region", { name: "Revisions" });
   await expect(revisions.getByText(/^Refit of 3 parameters to "Released-value bands": RMS/)).toBeVisible();
   await expect(revisions.getByText("r3")).toBeVisible();
+
+  // Reviewers see how the numbers were obtained, and the metrics follow the window they pick.
+  await page.getByRole("link", { name: /Open the review workspace/ }).click();
+  await expect(page.getByTestId("fit-origin")).toContainText("Revision 3 is the result of a refit of revision 2");
+  await expect(page.getByRole("img", { name: /Bands at the start values \(dashed\) and fitted \(solid\)/ })).toBeVisible();
+  const compared = page.locator("#metric-points td").nth(1);
+  const before = await compared.innerText();
+  await page.getByLabel("Energy window from (eV)").fill("-5");
+  await page.getByLabel("Energy window to (eV)").fill("0");
+  await expect(page.getByTestId("metrics-settings")).toContainText("window -5 to 0 eV");
+  await expect(compared).not.toHaveText(before, { timeout: 20_000 });
 });

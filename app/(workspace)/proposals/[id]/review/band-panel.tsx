@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useRef, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { alignedView, deltaE, type Alignment } from "@/lib/review/alignment";
 import { chartScales, CHART, orderedRange, type Range } from "@/lib/review/band-plot-layout";
 import { nearestPathIndex } from "@/lib/review/band-range";
@@ -37,6 +37,7 @@ export function BandPanel({
   initialWindow,
   initialAlignment,
   slug = "proposal",
+  onSettingsChange,
 }: {
   data: BandViewData;
   remarkBase: string;
@@ -45,6 +46,8 @@ export function BandPanel({
   initialAlignment?: Alignment;
   /** File stem of the exports (see proposalSlug). */
   slug?: string;
+  /** Told when the alignment or a valid energy window changes (the metrics table follows them). */
+  onSettingsChange?: (settings: { alignment: Alignment; window: Range | null }) => void;
 }) {
   const [controls, setControls] = useState<BandControlsState>({
     alignment: initialAlignment ?? (data.proposedVbm === null ? "none" : "vbm"),
@@ -56,6 +59,10 @@ export function BandPanel({
   const [message, setMessage] = useState<string | null>(null);
   const svgRef = useRef<SVGSVGElement | null>(null);
   const energyWindow = useMemo(() => parseWindow(controls.windowText), [controls.windowText]);
+  const windowKey = energyWindow ? energyWindow.join(",") : "";
+  useEffect(() => {
+    onSettingsChange?.({ alignment: controls.alignment, window: windowKey ? (windowKey.split(",").map(Number) as Range) : null });
+  }, [controls.alignment, windowKey, onSettingsChange]);
 
   const shown = useMemo(() => {
     const visible = { ...data, references: data.references.filter((r) => !controls.hidden.includes(r.id)) };

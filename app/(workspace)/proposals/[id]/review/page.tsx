@@ -19,10 +19,9 @@ import { canonicalJson } from "@/lib/tb/canonical";
 import { ProposalHeading } from "../proposal-heading";
 import { Section } from "../section";
 import { StagePanel } from "../stage-panel";
-import { BandPanel } from "./band-panel";
+import { BandsWithMetrics } from "./bands-with-metrics";
 import { ChecksGatePanel } from "./checks-gate-panel";
 import { FitOriginSection } from "./fit-origin-panel";
-import { MetricsTable } from "./metrics-table";
 import { ParameterDiffPanel } from "./parameter-diff-panel";
 import { RemarksPanel } from "./remarks-panel";
 import { parseSide, resolveSide } from "./revision-choice";
@@ -50,7 +49,8 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const diff = to.doc ? buildParameterDiff(from.doc, to.doc, { window: window ?? undefined }) : null;
   const references = view.references.map((r) => ({ id: r.id, name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } }));
   const bandView = buildBandView(latestDocument, baseDocument, references);
-  const metrics = buildMetrics(latestDocument, baseDocument, references[0] ?? null, { window, alignment: "vbm" });
+  const metricsSettings = { window, alignment: bandView.proposedVbm === null ? ("none" as const) : ("vbm" as const) };
+  const metrics = buildMetrics(latestDocument, baseDocument, references[0] ?? null, metricsSettings);
   const remarks = await listRemarks(id);
   const toRevision = view.revisions.find((r) => `r${r.number}` === to.value) ?? null;
   const ctx = { authorId: proposal.authorId, assignedReviewerIds: view.facts.assignedReviewerIds, familyCuratorIds: view.facts.familyCuratorIds };
@@ -92,10 +92,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
             <FitOriginSection proposalId={id} revisionId={toRevision.id} revisionNumber={toRevision.number} document={to.doc} />
           ) : null}
           <Section title="What it does to the bands">
-            <BandPanel data={bandView} remarkBase={base} initialWindow={window} slug={proposalSlug(proposal.title)} />
-            <div className="mt-6">
-              <MetricsTable rows={metrics} />
-            </div>
+            <BandsWithMetrics proposalId={id} data={bandView} remarkBase={base} slug={proposalSlug(proposal.title)} initial={metricsSettings} initialRows={metrics} />
           </Section>
           <Section title={`Checks and gate (revision ${latest.number})`}>
             <ChecksGatePanel checks={latest.checkResults} criteria={view.criteria} waivedReason={latest.checksWaivedReason} gateReasons={acceptanceBlockers(view.facts)} />
