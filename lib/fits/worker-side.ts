@@ -75,6 +75,7 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
       const latest = await getLatestRevision(tx, run.proposalId);
       const starter = await getUserRoles(tx, run.startedBy);
       if (!proposal || !starter) applyNote = "The proposal or its author no longer exists.";
+      else if (!starter.active) applyNote = "Not saved as a revision: the account that started this fit has been deactivated.";
       else if (latest?.id !== run.baseRevisionId) {
         const later = latest ? parseDocument(latest.document) : null;
         const keeps = later?.ok === true && fitStillApplies(ctx.document, later.doc, outcome);
