@@ -68,9 +68,15 @@ export const passwordResetTokens = pgTable(
     tokenHash: text("token_hash").notNull(),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     usedAt: timestamp("used_at", { withTimezone: true }),
+    /** Where the request came from (proxy-reported), for the per-address cap on reset mail. */
+    requestedIp: text("requested_ip"),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("password_reset_tokens_token_hash_key").on(t.tokenHash), index("password_reset_tokens_user_idx").on(t.userId)],
+  (t) => [
+    uniqueIndex("password_reset_tokens_token_hash_key").on(t.tokenHash),
+    index("password_reset_tokens_user_idx").on(t.userId),
+    index("password_reset_tokens_ip_idx").on(t.requestedIp, t.createdAt),
+  ],
 );
 export type PasswordResetToken = typeof passwordResetTokens.$inferSelect;
 

@@ -2,13 +2,15 @@
 
 import { requestResetInput, resetPasswordInput } from "@/lib/accounts/schemas";
 import { requestPasswordReset, resetPassword } from "@/lib/accounts/service";
+import { headers } from "next/headers";
 import { defineAction } from "@/lib/action";
+import { clientIp } from "@/lib/auth/client-ip";
 
 export const requestResetAction = defineAction({
   access: "public",
   schema: requestResetInput,
   run: async ({ email }) => {
-    await requestPasswordReset(email);
+    await requestPasswordReset(email, clientIp(await headers()));
     return { email };
   },
 });

@@ -1,3 +1,4 @@
+import { UNKNOWN_IP } from "@/lib/auth/client-ip";
 import "server-only";
 import { and, count, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
@@ -17,6 +18,8 @@ import type { AcceptInvitationInput, ChangePasswordInput, ChangeRolesInput, Invi
 const INVITATION_DAYS = 7;
 const RESET_MINUTES = 60;
 const MAX_RESETS_PER_WINDOW = 3;
+/** Reset mails an hour from one address, across all accounts (common practice: a few per person behind one NAT). */
+export const MAX_RESETS_PER_IP = 10;
 
 function appLink(path: string): string {
   return new URL(path, serverEnv().APP_URL).toString();
@@ -139,8 +142,11 @@ export async function setActive(actor: SessionUser, input: SetActiveInput): Prom
   });
 }
 
-/** Always answers the same way, so the form does not reveal which addresses have accounts. */
-export async function requestPasswordReset(email: string): Promise<void> {
+/**
+ * Always answers the same way, so the form does not reveal which addresses have accounts. `ip` is the requester's
+ * address as the proxy reports it; requests from an unknown address are capped per account only.
+ */
+export async function requestPasswordReset(email: string, ip: string): Promise<void> {
   await db.transaction(async (tx) => {
     const [user] = await tx.select({ id: users.id, name: users.name, active: users.active }).from(users).where(eq(users.email, email));
     if (!user || !user.active) return;
@@ -151,13 +157,21 @@ export async function requestPasswordReset(email: string): Promise<void> {
       .where(and(eq(passwordResetTokens.userId, user.id), gt(passwordResetTokens.createdAt, since)));
     // Same answer as ever, but no more mail: stops a stranger from flooding someone's inbox with reset links.
     if (recent >= MAX_RESETS_PER_WINDOW) return;
+    if (ip !== UNKNOWN_IP) {
+      const [{ fromHere }] = await tx
+        .select({ fromHere: count() })
+        .from(passwordResetTokens)
+        .where(and(eq(passwordResetTokens.requestedIp, ip), gt(passwordResetTokens.createdAt, since)));
+      // …and from one address to many accounts (a script walking a list of e-mails).
+      if (fromHere >= MAX_RESETS_PER_IP) return;
+    }
     await tx
       .update(passwordResetTokens)
       .set({ usedAt: new Date() })
       .where(and(eq(passwordResetTokens.userId, user.id), isNull(passwordResetTokens.usedAt)));
     const { token, hash } = newSecretToken();
     const expiresAt = new Date(Date.now() + RESET_MINUTES * 60_000);
-    await tx.insert(passwordResetTokens).values({ userId: user.id, tokenHash: hash, expiresAt });
+    await tx.insert(passwordResetTokens).values({ userId: user.id, tokenHash: hash, expiresAt, requestedIp: ip === UNKNOWN_IP ? null : ip });
     await recordAudit(tx, { actorId: null, action: "password.reset-requested", subjectType: "user", subjectId: user.id });
     await sendMail(passwordResetMail({ to: email, name: user.name, link: appLink(`/reset-password/${token}`), expiresAt }));
   });

@@ -3,16 +3,8 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { AppError } from "@/lib/errors";
 import { authenticate } from "./authenticate";
+import { clientIp } from "./client-ip";
 import { SIGN_IN_FAILED } from "./sign-in-messages";
-
-function clientIp(headers: unknown): string {
-  const get = (name: string): string | undefined => {
-    if (headers && typeof (headers as Headers).get === "function") return (headers as Headers).get(name) ?? undefined;
-    const value = (headers as Record<string, string | string[] | undefined> | undefined)?.[name];
-    return Array.isArray(value) ? value[0] : value;
-  };
-  return get("x-forwarded-for")?.split(",")[0]?.trim() || get("x-real-ip") || "unknown";
-}
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: 8 * 60 * 60 },

@@ -3,7 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { afterAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
 import { auditEvents, invitations, users } from "@/db/schema";
-import { acceptInvitation, changeRoles, describeInvitation, inviteUser, requestPasswordReset, resetPassword, setActive } from "@/lib/accounts/service";
+import { acceptInvitation, changeRoles, describeInvitation, inviteUser, MAX_RESETS_PER_IP, requestPasswordReset, resetPassword, setActive } from "@/lib/accounts/service";
 import { authenticate } from "@/lib/auth/authenticate";
 import { hashToken } from "@/lib/auth/secrets";
 import { AppError } from "@/lib/errors";
@@ -107,13 +107,13 @@ describe("roles and access", () => {
 describe("password reset", () => {
   it("says nothing about unknown addresses and sends no mail", async () => {
     const email = freshEmail();
-    await requestPasswordReset(email);
+    await requestPasswordReset(email, "198.51.100.20");
     expect(await mailTo(email)).toHaveLength(0);
   });
 
   it("resets once by mailed link; the link cannot be reused", async () => {
     const person = await createPerson(["author"]);
-    await requestPasswordReset(person.email);
+    await requestPasswordReset(person.email, "198.51.100.21");
     const token = tokenOf(await linkFromLatestMail(person.email, "/reset-password/"));
     await resetPassword({ token, password: "brand-new-password", confirm: "brand-new-password" });
     expect(await authenticate({ email: person.email, password: "brand-new-password" }, "203.0.113.3")).toBe(person.id);
@@ -125,9 +125,21 @@ describe("password reset", () => {
 describe("password reset flooding", () => {
   it("sends at most three reset links an hour to one account, answering the same way every time", async () => {
     const person = await createPerson(["author"]);
-    for (let i = 0; i < 5; i++) await requestPasswordReset(person.email);
+    for (let i = 0; i < 5; i++) await requestPasswordReset(person.email, `198.51.100.${30 + i}`);
     const resets = (await mailTo(person.email)).filter((m) => m.subject === "Reset your Bandgate password");
     expect(resets).toHaveLength(3);
+  });
+
+  it(`sends at most ${MAX_RESETS_PER_IP} reset links an hour from one address across accounts; other addresses are not held back`, async () => {
+    const ip = "198.51.100.150";
+    const people = [];
+    for (let i = 0; i <= MAX_RESETS_PER_IP; i++) people.push(await createPerson(["consumer"], `walk${i}`));
+    for (const p of people) await requestPasswordReset(p.email, ip);
+    const mailed = await Promise.all(people.map(async (p) => (await mailTo(p.email)).length));
+    expect(mailed.slice(0, MAX_RESETS_PER_IP)).toEqual(Array(MAX_RESETS_PER_IP).fill(1));
+    expect(mailed[MAX_RESETS_PER_IP]).toBe(0);
+    await requestPasswordReset(people[MAX_RESETS_PER_IP].email, "203.0.113.250");
+    expect(await mailTo(people[MAX_RESETS_PER_IP].email)).toHaveLength(1);
   });
 });
 

@@ -1,0 +1,2 @@
+ALTER TABLE "password_reset_tokens" ADD COLUMN "requested_ip" text;--> statement-breakpoint
+CREATE INDEX "password_reset_tokens_ip_idx" ON "password_reset_tokens" USING btree ("requested_ip","created_at");
