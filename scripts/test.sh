@@ -30,6 +30,7 @@ export WEBHOOK_ALLOW_PRIVATE=true   # test receivers listen on 127.0.0.1
 start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
 
 status=0
+log "lint (eslint)"; npx eslint . || status=1
 log "type check (tsc)"; npx tsc --noEmit -p tsconfig.json || status=1
 log "unit tests"; npx vitest run --project unit || status=1
 log "integration tests (PostgreSQL on 127.0.0.1:$TEST_PG_PORT)"; npx vitest run --project integration || status=1

@@ -1,7 +1,7 @@
 "use client";
 
 import { DndContext, KeyboardSensor, PointerSensor, useSensor, useSensors, type Announcements, type DragEndEvent, type DragStartEvent } from "@dnd-kit/core";
-import { useEffect, useMemo, useState } from "react";
+import { useMemo, useState } from "react";
 import useSWR from "swr";
 import { fetchJson } from "@/lib/client-fetch";
 import type { BoardCard } from "../card";
@@ -9,6 +9,7 @@ import type { MoveHint, RuleActor } from "../rules";
 import type { BoardFilters } from "../schemas";
 import { ARCHIVE_STAGES, LANE_STAGES, STAGE_META, type Stage } from "../stages";
 import { BoardFilterBar, filtersToQuery } from "./board-filters";
+import { useHydrated } from "./use-hydrated";
 import { hintsForCard } from "./card-hints";
 import { Lane, type LaneState } from "./lane";
 import { laneCollision, laneCoordinates } from "./lane-keyboard";
@@ -29,8 +30,7 @@ export function BoardView({ initial, viewer, filters }: { initial: BoardData; vi
   const [active, setActive] = useState<BoardCard | null>(null);
   const [pending, setPending] = useState<{ card: BoardCard; to: Stage } | null>(null);
   // Lets tests (and impatient people) know the board is interactive, not just server-rendered.
-  const [ready, setReady] = useState(false);
-  useEffect(() => setReady(true), []);
+  const ready = useHydrated();
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 5 } }), useSensor(KeyboardSensor, { coordinateGetter: laneCoordinates }));
 
   const curators = useMemo(() => Object.fromEntries(board.families.map((f) => [f.slug, f.curatorIds])), [board.families]);

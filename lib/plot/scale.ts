@@ -29,7 +29,15 @@ export function niceTicks(lo: number, hi: number, count = 6): number[] {
 export function energyExtent(series: readonly (readonly (readonly number[])[])[], pad = 0.05): [number, number] {
   let lo = Infinity;
   let hi = -Infinity;
-  for (const rows of series) for (const row of rows) for (const e of row) if (Number.isFinite(e)) (lo = Math.min(lo, e)), (hi = Math.max(hi, e));
+  for (const rows of series) {
+    for (const row of rows) {
+      for (const e of row) {
+        if (!Number.isFinite(e)) continue;
+        lo = Math.min(lo, e);
+        hi = Math.max(hi, e);
+      }
+    }
+  }
   if (!Number.isFinite(lo)) return [-1, 1];
   const margin = (hi - lo || 1) * pad;
   return [lo - margin, hi + margin];

@@ -100,7 +100,12 @@ export function buildBandView(proposed: ModelDocument, base: ModelDocument | nul
 
   let lo = Infinity;
   let hi = -Infinity;
-  for (const m of [mesh, baseMesh]) for (const row of m?.levels ?? []) (lo = Math.min(lo, row[0])), (hi = Math.max(hi, row[row.length - 1]));
+  for (const m of [mesh, baseMesh]) {
+    for (const row of m?.levels ?? []) {
+      lo = Math.min(lo, row[0]);
+      hi = Math.max(hi, row[row.length - 1]);
+    }
+  }
   const range = { energyMin: lo - 0.5, energyMax: hi + 0.5, points: DOS_POINTS, sigma: DOS_SIGMA };
   const dos = computeDos(mesh.levels, range, mesh.weights);
   const baseDos = baseMesh ? computeDos(baseMesh.levels, range, baseMesh.weights) : null;

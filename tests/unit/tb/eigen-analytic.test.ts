@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { createEigenWorkspace, eigHermitian, eigvalsHermitian } from "@/lib/tb/eigen";
+import { eigHermitian } from "@/lib/tb/eigen";
 
 type Solved = { values: Float64Array; vecRe: Float64Array; vecIm: Float64Array };
 

@@ -41,7 +41,7 @@ function bandLines(rows: number[][] | null, distance: number[], s: ChartScales, 
   ));
 }
 
-export function BandChart(props: BandChartProps) {
+export function BandChart({ svgRef, ...props }: BandChartProps) {
   const { view, scales: s, window } = props;
   const [drag, setDrag] = useState<{ x0: number; y0: number; x1: number; y1: number } | null>(null);
   const [k0, k1] = s.x.domain;
@@ -61,7 +61,7 @@ export function BandChart(props: BandChartProps) {
   };
   const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
   return (
-    <svg ref={props.svgRef} viewBox={`0 0 ${CHART.width} ${CHART.height}`} className="h-auto w-full select-none" role="img" aria-labelledby="band-chart-title band-chart-desc">
+    <svg ref={svgRef} viewBox={`0 0 ${CHART.width} ${CHART.height}`} className="h-auto w-full select-none" role="img" aria-labelledby="band-chart-title band-chart-desc">
       <title id="band-chart-title">{props.title}</title>
       <desc id="band-chart-desc">{props.description}</desc>
       <defs>

@@ -79,7 +79,7 @@ export default async function ReleasePage({ params }: { params: Promise<{ slug: 
             <ModelFacts view={model.view} />
           </div>
         ) : (
-          <FormMessage kind="error">This release's document does not validate with the current engine: {model.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}</FormMessage>
+          <FormMessage kind="error">This release&apos;s document does not validate with the current engine: {model.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}</FormMessage>
         )}
         <SafetyNote validity={model.ok ? model.view.validity : undefined} />
         <div className="grid gap-8 lg:grid-cols-2">
