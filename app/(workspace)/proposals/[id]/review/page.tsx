@@ -11,9 +11,10 @@ import { requirePageUser } from "@/lib/auth/guard";
 import { BOARD_ROLES } from "@/lib/auth/navigation";
 import { validityText } from "@/lib/families/view";
 import type { ParsedReferenceBands } from "@/lib/reference-bands";
-import { buildBandView } from "@/lib/review/band-view";
+import { buildBandView, type BandViewData } from "@/lib/review/band-view";
 import { proposalSlug } from "@/lib/review/export-names";
-import { buildMetrics } from "@/lib/review/metrics";
+import { buildMetrics, type MetricsRow } from "@/lib/review/metrics";
+import { RecentResults } from "@/lib/review/recent-results";
 import { buildParameterDiff } from "@/lib/review/param-diff";
 import { canonicalJson } from "@/lib/tb/canonical";
 import { ProposalHeading } from "../proposal-heading";
@@ -30,6 +31,10 @@ import { TextDiffPanel } from "./text-diff-panel";
 import { VerdictsPanel } from "./verdicts-panel";
 
 export const metadata: Metadata = { title: "Review workspace" };
+
+/** Band views and metrics of recently viewed proposals: a page refresh (e.g. after a remark) does not recompute them. */
+const bandViews = new RecentResults<BandViewData>(32);
+const metricsTables = new RecentResults<MetricsRow[]>(64);
 export const dynamic = "force-dynamic";
 
 type Search = Promise<{ from?: string; to?: string; remark?: string }>;
@@ -48,9 +53,13 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const window = latestDocument.validity.energyWindow ?? null;
   const diff = to.doc ? buildParameterDiff(from.doc, to.doc, { window: window ?? undefined }) : null;
   const references = view.references.map((r) => ({ id: r.id, name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } }));
-  const bandView = buildBandView(latestDocument, baseDocument, references);
+  // Keyed by immutable ids: the latest revision, the base release and the reference sets.
+  const inputsKey = [latest.id, proposal.baseReleaseId ?? "none", ...references.map((r) => r.id)].join("|");
+  const bandView = bandViews.get(inputsKey, () => buildBandView(latestDocument, baseDocument, references));
   const metricsSettings = { window, alignment: bandView.proposedVbm === null ? ("none" as const) : ("vbm" as const) };
-  const metrics = buildMetrics(latestDocument, baseDocument, references[0] ?? null, metricsSettings);
+  const metrics = metricsTables.get(`${inputsKey}|${metricsSettings.alignment}|${window ?? ""}`, () =>
+    buildMetrics(latestDocument, baseDocument, references[0] ?? null, metricsSettings),
+  );
   const remarks = await listRemarks(id);
   const toRevision = view.revisions.find((r) => `r${r.number}` === to.value) ?? null;
   const ctx = { authorId: proposal.authorId, assignedReviewerIds: view.facts.assignedReviewerIds, familyCuratorIds: view.facts.familyCuratorIds };
