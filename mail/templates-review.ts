@@ -31,3 +31,12 @@ export function decisionMail(to: string, p: { title: string; decision: "accepted
 export function mentionMail(to: string, p: { title: string; writer: string; excerpt: string; link: string }): MailMessage {
   return notice(to, `${p.writer} mentioned you on ${p.title}`, [`${p.writer} mentioned you in a remark on “${p.title}”:`, p.excerpt], p.link);
 }
+
+export function fitFinishedMail(to: string, p: { title: string; outcome: string; details: string[]; link: string }): MailMessage {
+  return {
+    to,
+    subject: `Refit ${p.outcome}: ${p.title}`,
+    text: `Your refit of “${p.title}” ${p.outcome}.\n\n${p.details.join("\n\n")}\n\n${p.link}\n`,
+    html: mailLayout([`Your refit of “${p.title}” ${p.outcome}.`, ...p.details], { href: p.link, label: "Open the fit record" }),
+  };
+}

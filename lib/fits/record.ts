@@ -68,3 +68,10 @@ export function appendCost(history: CostPoint[], point: CostPoint): CostPoint[] 
   const thinned = history.filter((_, i) => i % 2 === 0);
   return [...thinned, point];
 }
+
+/** A fit that ran at least this long is worth an e-mail (nobody watches a progress bar that long); failures always are. */
+export const MAIL_FITS_AFTER_MS = 60_000;
+
+export function shouldMailFit(status: FitStatus, elapsedMs: number): boolean {
+  return status === "failed" || (status !== "cancelled" && elapsedMs >= MAIL_FITS_AFTER_MS);
+}

@@ -10,6 +10,7 @@ import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/errors";
 import { loadFitContext, type FitContext } from "./context";
 import { fitStillApplies } from "./apply-onto";
+import { notifyFitFinished } from "./notify-finished";
 import { fittedDocument } from "./result-document";
 import { fitRevisionNote, statusOfOutcome, type CostPoint, type FitOutcome } from "./record";
 
@@ -122,6 +123,7 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
       after: { fit: run.id, status: outcome.status, rms: outcome.rms, iterations: outcome.iterations, savedAsRevision: Boolean(resultRevisionId) },
     });
   });
+  await notifyFitFinished(run.id);
 }
 
 /** A failed attempt that will be retried: back to waiting, with the reason kept. */
@@ -141,6 +143,7 @@ export async function failFit(fitId: string, reason: string): Promise<void> {
       .returning({ proposalId: fitRuns.proposalId });
     if (run) await recordAudit(tx, { actorId: null, action: "fit.failed", subjectType: "proposal", subjectId: run.proposalId, after: { fit: fitId, reason } });
   });
+  await notifyFitFinished(fitId);
 }
 
 /**

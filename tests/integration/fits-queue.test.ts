@@ -2,7 +2,7 @@ import { desc, eq } from "drizzle-orm";
 import PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, db } from "@/db/client";
-import { fitRuns, revisions } from "@/db/schema";
+import { fitRuns, revisions, users } from "@/db/schema";
 import { FINAL_FIT_STATUSES, outcomeOf, type FitOutcome } from "@/lib/fits/record";
 import { parseFitSpec } from "@/lib/fits/service";
 import { buildFitProblem } from "@/lib/fits/problem";
@@ -13,6 +13,8 @@ import { fitDocument } from "@/lib/tb/analysis/fit-document";
 import { getParameter } from "@/lib/tb/parameters";
 import { TB_ENGINE_VERSION } from "@/lib/tb/version";
 import { chainDocument, versionOf } from "../support/board-fixtures";
+import { mailTo } from "../support/mailbox";
+import { waitFor } from "./registry-world";
 import {
   CHAIN_KEYS,
   CHAIN_START,
@@ -144,6 +146,14 @@ describe("a worker that dies holding a refit", () => {
     expect(row.attempts).toBe(1);
     expect(row.failureReason).toBe("the worker running it stopped (crash or restart) on every attempt; no retries left");
     expect(row.outcome).toBeNull();
+    // Whoever started it hears about a failure by e-mail, with the reason and a link to the record.
+    const [starter] = await db.select({ email: users.email }).from(users).where(eq(users.id, row.startedBy));
+    const [mail] = await waitFor("the failure notice", async () => {
+      const box = (await mailTo(starter.email)).filter((m) => m.subject.startsWith("Refit failed"));
+      return box.length ? box : null;
+    });
+    expect(mail.textBody).toContain("no retries left");
+    expect(mail.textBody).toContain(`/fits/${fitId}`);
   });
 });
 

@@ -97,3 +97,14 @@ describe("whether a fit may be saved on top of a later revision", () => {
     expect(fitStillApplies(start, withoutS, outcome)).toBe(false);
   });
 });
+
+describe("which finished fits are worth an e-mail", () => {
+  it("failures always; long runs that converged or stopped; never a cancellation or a short run someone watched", async () => {
+    const { shouldMailFit, MAIL_FITS_AFTER_MS } = await import("@/lib/fits/record");
+    expect(shouldMailFit("failed", 10)).toBe(true);
+    expect(shouldMailFit("converged", MAIL_FITS_AFTER_MS)).toBe(true);
+    expect(shouldMailFit("not_converged", MAIL_FITS_AFTER_MS + 1)).toBe(true);
+    expect(shouldMailFit("converged", MAIL_FITS_AFTER_MS - 1)).toBe(false);
+    expect(shouldMailFit("cancelled", 10 * MAIL_FITS_AFTER_MS)).toBe(false);
+  });
+});
