@@ -1,5 +1,7 @@
 import type { ModelDocument } from "@/lib/tb/document";
 import { setParameters } from "@/lib/tb/parameters";
+import { previewDocumentFit } from "@/lib/tb/analysis/fit-document";
+import { buildFitProblem, type StoredReference } from "./problem";
 import type { FitOutcome } from "./record";
 import type { FitSpec } from "./spec";
 
@@ -22,22 +24,48 @@ function formatUncertainty(value: number, se: number | undefined): string {
 }
 
 /**
- * The document a fit produces: the fitted values, and provenance that says how they were obtained — the
- * reference's method and code, the fit window and weights, and a citation for every fitted parameter naming the fit.
+ * The energy range (model scale, eV) the fit actually covered: the chosen window, or, with none, the span of the
+ * aligned reference values that entered it — so the provenance always states a fit window.
  */
-export function fittedDocument(start: ModelDocument, outcome: FitOutcome, spec: FitSpec, reference: FitReferenceInfo, fitId: string): ModelDocument {
+export function fittedEnergyRange(start: ModelDocument, parsed: StoredReference, spec: FitSpec, shift: number): [number, number] {
+  if (spec.window) return spec.window;
+  const problem = buildFitProblem(start, parsed, spec);
+  const { pairs } = previewDocumentFit(start, problem.keys, problem.reference, problem.options);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const p of pairs) {
+    const e = (problem.reference.energies[p.k][p.referenceBand] as number) + shift;
+    lo = Math.min(lo, e);
+    hi = Math.max(hi, e);
+  }
+  const round = (x: number, f: (v: number) => number) => f(x * 1000) / 1000;
+  return [round(lo, Math.floor), round(hi, Math.ceil)];
+}
+
+/**
+ * The document a fit produces: the fitted values, and provenance that says how they were obtained — the
+ * reference's method and code, the fit window (see fittedEnergyRange) and weights, and a citation for every fitted
+ * parameter naming the fit.
+ */
+export function fittedDocument(
+  start: ModelDocument,
+  outcome: FitOutcome,
+  spec: FitSpec,
+  reference: FitReferenceInfo,
+  fitId: string,
+  energyRange: [number, number],
+): ModelDocument {
   const doc = setParameters(start, Object.fromEntries(outcome.names.map((k, i) => [k, outcome.values[i]])));
   const ref = reference.provenance;
   const citations = { ...doc.provenance.citations };
   outcome.names.forEach((key, i) => {
     citations[key] = `refit to reference bands "${reference.name}" (fit ${fitId.slice(0, 8)}): ${formatUncertainty(outcome.values[i], outcome.standardErrors?.[i])}`;
   });
-  const { fitWindow: _previous, ...kept } = doc.provenance;
   return {
     ...doc,
     provenance: {
-      ...kept,
-      ...(spec.window ? { fitWindow: spec.window } : {}),
+      ...doc.provenance,
+      fitWindow: energyRange,
       referenceMethod: ref.method ?? doc.provenance.referenceMethod,
       referenceCode: ref.code ?? doc.provenance.referenceCode,
       functional: ref.functional ?? doc.provenance.functional,

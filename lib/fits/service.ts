@@ -18,7 +18,7 @@ import { checkedPreview, loadFitContext } from "./context";
 import type { FitPreview } from "./preview";
 import { countActiveFits, getFitRun } from "./queries";
 import { fitRevisionNote } from "./record";
-import { fittedDocument } from "./result-document";
+import { fittedDocument, fittedEnergyRange } from "./result-document";
 import { fitSpecSchema, type FitSpec } from "./spec";
 
 export function parseFitSpec(input: unknown): FitSpec {
@@ -162,7 +162,8 @@ export async function applyFit(actor: SessionUser, fitId: string, input: unknown
         `Revision ${latest.number} changed parameters this fit kept fixed (it started from revision ${found.baseRevisionNumber}); saving it would undo them. Start a new refit from revision ${latest.number} instead.`,
       );
     }
-    const doc = fittedDocument(latestDoc?.ok ? latestDoc.doc : ctx.document, outcome, run.spec, ctx.reference, fitId);
+    const range = fittedEnergyRange(ctx.document, ctx.parsedReference, run.spec, outcome.shift);
+    const doc = fittedDocument(latestDoc?.ok ? latestDoc.doc : ctx.document, outcome, run.spec, ctx.reference, fitId, range);
     const saved = await appendRevision(tx, actor, proposal, doc, fitRevisionNote(outcome, found.referenceName, fitId), { fit: fitId });
     await tx.update(fitRuns).set({ resultRevisionId: saved.revisionId, applyNote: null }).where(eq(fitRuns.id, fitId));
     return { revision: saved.revision, version: saved.version };

@@ -11,7 +11,7 @@ import { AppError } from "@/lib/errors";
 import { loadFitContext, type FitContext } from "./context";
 import { fitStillApplies } from "./apply-onto";
 import { notifyFitFinished } from "./notify-finished";
-import { fittedDocument } from "./result-document";
+import { fittedDocument, fittedEnergyRange } from "./result-document";
 import { fitRevisionNote, statusOfOutcome, type CostPoint, type FitOutcome } from "./record";
 
 /* The worker's side of a fit run: claim, heartbeat, finish, give back for a retry, fail. No permission checks here:
@@ -89,7 +89,8 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
         const decision = decideRevise(starter, proposal);
         if (!decision.allowed) applyNote = `Not saved as a revision: ${decision.reasons.join(" ")}`;
         else {
-          const doc = fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id);
+          const range = fittedEnergyRange(ctx.document, ctx.parsedReference, run.spec, outcome.shift);
+          const doc = fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id, range);
           try {
             const saved = await tx.transaction((sp) => appendRevision(sp, starter, proposal, doc, fitRevisionNote(outcome, ctx.reference.name, run.id), { fit: run.id }));
             resultRevisionId = saved.revisionId;

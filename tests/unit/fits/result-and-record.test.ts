@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { appendCost, COST_HISTORY_LIMIT, fitRevisionNote, outcomeOf, statusOfOutcome, type CostPoint } from "@/lib/fits/record";
 import { compareReproduction } from "@/lib/fits/reproduce";
-import { describeFitWeights, fittedDocument } from "@/lib/fits/result-document";
+import { describeFitWeights, fittedDocument, fittedEnergyRange } from "@/lib/fits/result-document";
+import { submissionProblems } from "@/board/submission";
 import { fitDocument } from "@/lib/tb/analysis/fit-document";
 import { getParameter } from "@/lib/tb/parameters";
 import { documentHash } from "@/lib/tb/canonical";
@@ -23,7 +24,10 @@ describe("the document a fit produces", () => {
   it("carries the fitted values, the reference's provenance, the fit window and weights, and a citation with ±σ per fitted key", async () => {
     const result = await fitted();
     const outcome = outcomeOf(result);
-    const doc = fittedDocument(start, outcome, settings, { name: "synthetic", provenance: { method: "DFT-test", code: "code 1.0", structureSource: "relaxed" } }, "0123456789abcdef");
+    const reference = storedReference(truth, 0.002, 11);
+    const range = fittedEnergyRange(start, reference, settings, outcome.shift);
+    expect(range).toEqual([-20, 20]);
+    const doc = fittedDocument(start, outcome, settings, { name: "synthetic", provenance: { method: "DFT-test", code: "code 1.0", structureSource: "relaxed" } }, "0123456789abcdef", range);
     keys.forEach((k, i) => {
       expect(getParameter(doc, k)).toBe(outcome.values[i]);
       expect(doc.provenance.citations[k]).toMatch(new RegExp(`^refit to reference bands "synthetic" \\(fit 01234567\\): -?[0-9.]+ ± [0-9.e-]+ eV \\(1σ\\)$`));
@@ -48,6 +52,23 @@ describe("the document a fit produces", () => {
     expect(fitRevisionNote(outcome, "PBE bands", "abcdef0123456789")).toMatch(/^Refit of 2 parameters to "PBE bands": RMS [0-9.]+ meV, max [0-9.]+ meV, converged in \d+ iterations \(fit abcdef01\)$/);
     expect(statusOfOutcome({ ...outcome, status: "not converged" })).toBe("not_converged");
     expect(statusOfOutcome({ ...outcome, status: "cancelled" })).toBe("cancelled");
+  });
+});
+
+describe("the fit window a fit records", () => {
+  it("is the span of the aligned reference values that entered the fit when no window was chosen, so the submission gate finds one", async () => {
+    const open = spec({ parameters: keys.map((key) => ({ key })) });
+    const reference = storedReference(truth, 0.002, 11);
+    const problem = buildFitProblem(start, reference, open);
+    const result = await fitDocument(start, problem.keys, problem.reference, problem.options);
+    const values = reference.energies.flat().filter((e): e is number => e !== null);
+    const [lo, hi] = fittedEnergyRange(start, reference, open, result.shift);
+    expect(lo).toBeLessThanOrEqual(Math.min(...values));
+    expect(lo).toBeGreaterThan(Math.min(...values) - 0.001);
+    expect(hi).toBeGreaterThanOrEqual(Math.max(...values));
+    expect(hi).toBeLessThan(Math.max(...values) + 0.001);
+    const doc = fittedDocument(start, outcomeOf(result), open, { name: "r", provenance: {} }, "abcdefgh", [lo, hi]);
+    expect(submissionProblems(null, doc).filter((p) => p.includes("fit window") || p.includes("fit weights"))).toEqual([]);
   });
 });
 

@@ -12,7 +12,7 @@ import { loadFitContext } from "@/lib/fits/context";
 import { buildFitQuality } from "@/lib/fits/quality";
 import { getFitRun, listReruns } from "@/lib/fits/queries";
 import { compareReproduction } from "@/lib/fits/reproduce";
-import { describeFitWeights, fittedDocument } from "@/lib/fits/result-document";
+import { describeFitWeights, fittedDocument, fittedEnergyRange } from "@/lib/fits/result-document";
 import { fitRunView } from "@/lib/fits/view";
 import { ProposalHeading } from "../../proposal-heading";
 import { Section } from "../../section";
@@ -37,7 +37,7 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
   const fit = fitRunView(row);
   const ctx = await loadFitContext(db, id, run.referenceSetId, run.baseRevisionId);
   const outcome = run.outcome;
-  const fitted = outcome ? fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id) : null;
+  const fitted = outcome ? fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id, fittedEnergyRange(ctx.document, ctx.parsedReference, run.spec, outcome.shift)) : null;
   const quality = outcome && fitted ? buildFitQuality(ctx.document, fitted, ctx.parsedReference, run.spec, outcome) : null;
   const original = run.rerunOf ? await getFitRun(db, run.rerunOf) : null;
   const reruns = await listReruns(db, run.id);
