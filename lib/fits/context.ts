@@ -7,6 +7,7 @@ import { parseDocument } from "@/board/revision-facts";
 import { AppError } from "@/lib/errors";
 import { FitInputError } from "@/lib/tb/analysis/fit-input";
 import type { ModelDocument } from "@/lib/tb/document";
+import { listParameters } from "@/lib/tb/parameters";
 import { buildFitPreview, type FitPreview } from "./preview";
 import type { StoredReference } from "./problem";
 
@@ -54,9 +55,17 @@ export function checkedPreview(ctx: FitContext, spec: Parameters<typeof buildFit
     return buildFitPreview(ctx.document, ctx.parsedReference, spec);
   } catch (err) {
     if (err instanceof FitInputError) {
-      const message = err.message.replace(/^fit: /, "");
+      const message = inWords(err.message.replace(/^fit: /, ""), ctx.document);
       throw new AppError("refused:fit-input", `This refit cannot start: ${message}.`, undefined, { reasons: [message] });
     }
     throw err;
   }
+}
+
+/** Engine messages name parameters by key and open bounds as Infinity; people read labels and ∞. */
+function inWords(message: string, doc: ModelDocument): string {
+  let out = message.replace(/-Infinity/g, "−∞").replace(/Infinity/g, "+∞");
+  // Longest keys first, so onsite/X/s* is not read as onsite/X/s followed by "*".
+  for (const p of listParameters(doc).sort((a, b) => b.key.length - a.key.length)) out = out.split(p.key).join(p.label);
+  return out;
 }

@@ -40,11 +40,13 @@ export function initialFitForm(parameters: { key: string; label: string; value: 
   };
 }
 
+const DECIMAL = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+
 /** "" → null; a number; or a message. Accepts a Unicode minus and a decimal comma, as people paste them. */
 function readNumber(text: string, what: string, errors: string[]): number | null {
   const t = text.trim().replace("−", "-").replace(",", ".");
   if (t === "") return null;
-  const v = Number(t);
+  const v = DECIMAL.test(t) ? Number(t) : NaN;
   if (!Number.isFinite(v)) {
     errors.push(`${what}: "${text}" is not a number`);
     return null;
@@ -56,6 +58,34 @@ function required(text: string, what: string, errors: string[]): number {
   const v = readNumber(text, what, errors);
   if (v === null && text.trim() === "") errors.push(`${what} is required`);
   return v ?? NaN;
+}
+
+/**
+ * The server's field errors ("parameters.0.upper": […]) in the form's words, e.g. "upper bound of ε(A, s): …", so a
+ * message says which field to change.
+ */
+export function describeFieldErrors(fieldErrors: Record<string, string[]>, spec: FitSpecInput, labels: Record<string, string>): string[] {
+  const name = (path: string): string => {
+    const [head, index, field] = path.split(".");
+    const i = Number(index);
+    if (head === "parameters" && Number.isInteger(i)) {
+      const key = spec.parameters[i]?.key ?? "";
+      const label = labels[key] ?? key;
+      return field === "lower" || field === "upper" ? `${field} bound of ${label}` : label;
+    }
+    if (head === "bandWeights" && Number.isInteger(i)) return `band weight row ${i + 1}`;
+    if (head === "regionWeights" && Number.isInteger(i)) return `region ${i + 1}`;
+    const words: Record<string, string> = { window: "window", bandOffset: "band offset", maxIterations: "maximum iterations", restarts: "extra starts", seed: "seed", referenceSetId: "reference band set", parameters: "free parameters", alignment: "alignment" };
+    return words[head] ?? path;
+  };
+  return Object.entries(fieldErrors).flatMap(([path, messages]) => messages.map((m) => `${name(path)}: ${m}`));
+}
+
+/** Checks that need the reference's shape (known once a reference set is chosen). */
+export function checkAgainstReference(spec: FitSpecInput, bandCount: number): string[] {
+  return (spec.bandWeights ?? []).flatMap((w, i) =>
+    Number.isInteger(w.band) && (w.band < 0 || w.band >= bandCount) ? [`band weight row ${i + 1}: the reference has bands 0–${bandCount - 1} only`] : [],
+  );
 }
 
 export function toFitSpec(state: FitFormState): { spec: FitSpecInput; errors: string[] } {

@@ -1,5 +1,6 @@
 import { previewDocumentFit } from "@/lib/tb/analysis/fit-document";
 import type { ModelDocument } from "@/lib/tb/document";
+import { samplePath } from "@/lib/tb/kpath";
 import { buildFitProblem, type StoredReference } from "./problem";
 import type { FitSpec } from "./spec";
 
@@ -24,6 +25,8 @@ export interface FitPreview {
   shift: number;
   /** Free parameters the selected values do not depend on (their uncertainty would be undetermined). */
   insensitive: string[];
+  /** The free parameters are not determined together (a start would be refused). */
+  undetermined: boolean;
   perBand: FitPreviewBand[];
   plot: {
     distance: number[];
@@ -34,7 +37,14 @@ export interface FitPreview {
     /** [distance, aligned reference energy] of points left out. */
     excluded: [number, number][];
     stride: number;
+    /** High-symmetry points of the default path, at their positions (1/Å). */
+    ticks: { distance: number; label: string }[];
   };
+}
+
+function pathTicks(doc: ModelDocument): { distance: number; label: string }[] {
+  const path = samplePath(doc);
+  return path.ticks.map((t) => ({ distance: path.distance[t.index], label: t.label }));
 }
 
 export function buildFitPreview(doc: ModelDocument, reference: StoredReference, spec: FitSpec): FitPreview {
@@ -69,7 +79,8 @@ export function buildFitPreview(doc: ModelDocument, reference: StoredReference, 
     excluded: total - preview.pairs.length,
     shift: preview.shift,
     insensitive: preview.insensitive,
+    undetermined: preview.undetermined,
     perBand: [...perBand.values()].sort((a, b) => a.referenceBand - b.referenceBand),
-    plot: { distance, model: preview.energies, included: every(included), excluded: every(excluded), stride },
+    plot: { distance, model: preview.energies, included: every(included), excluded: every(excluded), stride, ticks: pathTicks(doc) },
   };
 }

@@ -38,6 +38,7 @@ export function outcomeOf(result: DocumentFitResult): FitOutcome {
     cost: result.cost,
     shift: result.shift,
     points: result.points,
+    startRms: result.startRms,
     rms: result.rms,
     maxAbs: result.maxAbs,
     perBand: result.perBand,
@@ -74,4 +75,14 @@ export const MAIL_FITS_AFTER_MS = 60_000;
 
 export function shouldMailFit(status: FitStatus, elapsedMs: number): boolean {
   return status === "failed" || (status !== "cancelled" && elapsedMs >= MAIL_FITS_AFTER_MS);
+}
+
+/**
+ * Fitted parameters the reference did not pin down: no uncertainty could be estimated, or it is larger than the
+ * value itself and than 1 eV (a tight-binding parameter known to worse than that is not known at all).
+ */
+export function undeterminedNames(outcome: FitOutcome): string[] {
+  const se = outcome.standardErrors;
+  if (!se) return outcome.names;
+  return outcome.names.filter((_, i) => !Number.isFinite(se[i]) || se[i] > Math.max(1, Math.abs(outcome.values[i])));
 }

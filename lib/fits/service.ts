@@ -12,6 +12,8 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
 import { enqueueFit, jobQueue } from "@/lib/jobs/boss";
 import { QUEUES } from "@/lib/jobs/queues";
+import type { ModelDocument } from "@/lib/tb/document";
+import { listParameters } from "@/lib/tb/parameters";
 import { TB_ENGINE_VERSION } from "@/lib/tb/version";
 import { fitStillApplies } from "./apply-onto";
 import { checkedPreview, loadFitContext } from "./context";
@@ -50,12 +52,23 @@ async function handOver(fitId: string): Promise<void> {
   }
 }
 
+/** A fit whose free parameters the selected values cannot pin down is refused before it starts. */
+function refuseUndetermined(preview: FitPreview, doc: ModelDocument): void {
+  if (!preview.undetermined) return;
+  const labels = new Map(listParameters(doc).map((p) => [p.key, p.label]));
+  const message = preview.insensitive.length
+    ? `No value in the fit changes with ${preview.insensitive.map((k) => labels.get(k) ?? k).join(", ")} (by symmetry, or because the alignment shift takes the change up), so the fit cannot determine ${preview.insensitive.length === 1 ? "it" : "them"}. Fix ${preview.insensitive.length === 1 ? "it" : "them"}.`
+    : "Some combination of the free parameters changes no value in the fit, so the fit cannot determine them all. Fix one of the parameters that act together.";
+  throw new AppError("refused:fit-input", `This refit cannot start: ${message}`, undefined, { reasons: [message] });
+}
+
 /** Records a refit after every check (rules, settings, preview); it waits for a worker until handed over. */
 export async function createFitRun(actor: SessionUser, proposalId: string, input: unknown): Promise<{ fitId: string; preview: FitPreview }> {
   const spec = parseFitSpec(input);
   const ctx = await loadFitContext(db, proposalId, spec.referenceSetId);
   enforce(decideStartFit(actor, ctx.facts, 0));
   const preview = checkedPreview(ctx, spec);
+  refuseUndetermined(preview, ctx.document);
   const fitId = await db.transaction(async (tx) => {
     await lockPerson(tx, actor.id);
     enforce(decideStartFit(actor, ctx.facts, await countActiveFits(tx, actor.id)));
@@ -152,6 +165,9 @@ export async function applyFit(actor: SessionUser, fitId: string, input: unknown
       throw new AppError("conflict:stale", `Someone changed this proposal while you were looking (it is now at version ${proposal.version}). Reload to see its current revisions.`);
     }
     const outcome = run.outcome as NonNullable<typeof run.outcome>;
+    if (outcome.values.every((v, i) => v === outcome.start[i])) {
+      throw new AppError("refused:unchanged", "This fit moved no value from its start, so there is nothing to save as a revision.");
+    }
     // Saved on top of the latest revision, so its later edits (metadata, other fits' values) are kept — but only when
     // that loses nothing: a revision that changed parameters this fit held fixed would be undone.
     const latest = await getLatestRevision(tx, proposal.id);

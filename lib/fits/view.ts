@@ -23,6 +23,8 @@ export interface FitRunView {
   /** Milliseconds since the worker last wrote progress (null before it started). */
   heartbeatAgeMs: number | null;
   cancelRequested: boolean;
+  /** RMS at the start values over the same points (absent on records made before it was kept). */
+  startRms: number | null;
   rms: number | null;
   maxAbs: number | null;
   reason: string | null;
@@ -55,6 +57,7 @@ export function fitRunView(row: FitRunRow, now = Date.now()): FitRunView {
     attempts: run.attempts,
     heartbeatAgeMs: run.progressAt ? Math.max(0, now - run.progressAt.getTime()) : null,
     cancelRequested: Boolean(run.cancelRequestedAt),
+    startRms: run.outcome?.startRms ?? null,
     rms: run.outcome?.rms ?? null,
     maxAbs: run.outcome?.maxAbs ?? null,
     reason: run.outcome?.reason ?? null,

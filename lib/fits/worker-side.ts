@@ -12,7 +12,7 @@ import { loadFitContext, type FitContext } from "./context";
 import { fitStillApplies } from "./apply-onto";
 import { notifyFitFinished } from "./notify-finished";
 import { fittedDocument, fittedEnergyRange } from "./result-document";
-import { fitRevisionNote, statusOfOutcome, type CostPoint, type FitOutcome } from "./record";
+import { fitRevisionNote, statusOfOutcome, undeterminedNames, type CostPoint, type FitOutcome } from "./record";
 
 /* The worker's side of a fit run: claim, heartbeat, finish, give back for a retry, fail. No permission checks here:
    the run was authorised when it was started. */
@@ -70,8 +70,13 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
     if (!current || current.status !== "running") return;
     let applyNote: string | null = NOT_SAVED[outcome.status] || null;
     let resultRevisionId: string | null = null;
+    const unpinned = undeterminedNames(outcome);
     if (run.rerunOf) applyNote = "A re-run checks that the stored fit reproduces; it is not saved as a revision.";
-    else if (outcome.status === "converged") {
+    else if (outcome.status === "converged" && outcome.values.every((v, i) => v === outcome.start[i])) {
+      applyNote = "The fit moved no value from its start (it was already at the best point), so there is nothing to save.";
+    } else if (outcome.status === "converged" && unpinned.length > 0) {
+      applyNote = `Not saved automatically: the reference does not determine ${unpinned.join(", ")} (no usable uncertainty). Fix ${unpinned.length === 1 ? "it" : "them"} and fit again, or save by hand if you accept that.`;
+    } else if (outcome.status === "converged") {
       const proposal = await lockProposal(tx, run.proposalId);
       const latest = await getLatestRevision(tx, run.proposalId);
       const starter = await getUserRoles(tx, run.startedBy);

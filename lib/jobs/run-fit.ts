@@ -39,7 +39,7 @@ export async function runFitJob(attempt: FitJobAttempt): Promise<void> {
   let latest: { iteration: number; cost: number | null } = { iteration: 0, cost: null };
   let stopReason: "cancel" | "time" | "shutdown" | "lost" | null = null;
   const thread = runFitInThread({ type: "run", doc: ctx.document, keys: problem.keys, reference: problem.reference, options: problem.options }, (p) => {
-    latest = { iteration: p.iteration, cost: p.cost };
+    latest = { iteration: p.iteration, cost: latest.cost === null ? p.cost : Math.min(latest.cost, p.cost) };
     history = appendCost(history, [p.iteration, p.cost, p.elapsedMs]);
   });
   const stop = (why: NonNullable<typeof stopReason>) => {

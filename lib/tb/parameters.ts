@@ -40,6 +40,11 @@ export function listParameters(doc: ModelDocument): ParameterRef[] {
   return out;
 }
 
+/** key → human label, for tables and messages. */
+export function parameterLabels(doc: ModelDocument): Record<string, string> {
+  return Object.fromEntries(listParameters(doc).map((p) => [p.key, p.label]));
+}
+
 export function getParameter(doc: ModelDocument, key: string): number {
   const found = listParameters(doc).find((p) => p.key === key);
   if (!found) throw new Error(`unknown parameter key "${key}"`);

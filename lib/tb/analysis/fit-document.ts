@@ -5,7 +5,8 @@ import { listParameters, setParameters } from "../parameters";
 import type { ReferenceBands } from "./compare-reference";
 import { fitBandModel, selectWeightedPairs, type FitModel, type FitResult } from "./fit";
 import { FitInputError, validateFitInput, validatePointCount, type BandFitOptions } from "./fit-input";
-import type { WeightedPair } from "./fit-residuals";
+import { buildResiduals, type WeightedPair } from "./fit-residuals";
+import { computeFitStatistics } from "./fit-statistics";
 import { spinDegeneracyOf } from "./model-solver";
 import { seededUniform } from "./seeded-uniform";
 import { buildDerivativeModels, computeBandDerivatives } from "./sensitivity";
@@ -87,8 +88,13 @@ export interface DocumentFitPreview {
   pairs: WeightedPair[];
   /** Model bands at the reference k-points, at the start values. */
   energies: number[][];
-  /** Free parameters that move none of the fitted values at the start point (∂E/∂p = 0 there): the fit cannot determine them. */
+  /**
+   * Free parameters that change no residual at the start point: ∂E/∂p = 0 at every selected value, or a uniform
+   * shift that the alignment takes up (an on-site energy under a least-squares shift). The fit cannot determine them.
+   */
   insensitive: string[];
+  /** True when the free parameters together are not determined (JᵀJ singular): some combination changes nothing. */
+  undetermined: boolean;
 }
 
 /** What a fit would use, without running it; refuses the same bad input as fitDocument. */
@@ -99,8 +105,13 @@ export function previewDocumentFit(doc: ModelDocument, keys: string[], reference
   const { shift, pairs } = selectWeightedPairs(first.energies, reference, prepared.options);
   validatePointCount(pairs.length, keys.length, opts.window);
   const P = keys.length;
-  const insensitive = keys.filter((_, j) => pairs.every((p) => Math.abs(first.derivatives[p.k][p.modelBand * P + j]) < 1e-10));
-  return { start: prepared.start, shift, pairs, energies: first.energies.map((row) => Array.from(row)), insensitive };
+  const { r, jac } = buildResiduals(first, pairs, reference, prepared.options, P);
+  const columnNorm = (j: number) => Math.sqrt(pairs.reduce((acc, _, i) => acc + jac[i * P + j] ** 2, 0));
+  const norms = keys.map((_, j) => columnNorm(j));
+  const scale = Math.max(...norms, 1e-300);
+  const insensitive = keys.filter((_, j) => norms[j] <= 1e-9 * scale || norms[j] < 1e-12);
+  const undetermined = insensitive.length > 0 || computeFitStatistics(r, jac, P).covariance === null;
+  return { start: prepared.start, shift, pairs, energies: first.energies.map((row) => Array.from(row)), insensitive, undetermined };
 }
 
 
@@ -127,6 +138,7 @@ export async function fitDocument(doc: ModelDocument, keys: string[], reference:
   const next = seededUniform(opts.seed ?? 1);
   let iterationsBefore = 0;
   let best: FitResult | null = null;
+  let startRms = NaN;
   const starts: RestartOutcome[] = [];
   for (let run = 0; run <= restarts; run++) {
     const start = run === 0 ? prepared.start : restartPoint(prepared.start, opts.lower, opts.upper, next);
@@ -136,6 +148,7 @@ export async function fitDocument(doc: ModelDocument, keys: string[], reference:
       onProgress: opts.onProgress && ((p) => opts.onProgress?.({ ...p, iteration: offset + p.iteration, elapsedMs: Date.now() - t0 })),
     });
     iterationsBefore += result.iterations;
+    if (run === 0) startRms = result.startRms;
     starts.push({ start, status: result.status, cost: result.cost, iterations: result.iterations });
     best = pick(best, result);
     if (result.status === "cancelled") break;
@@ -144,8 +157,9 @@ export async function fitDocument(doc: ModelDocument, keys: string[], reference:
   return {
     ...chosen,
     status: starts.some((s) => s.status === "cancelled") ? "cancelled" : chosen.status,
-    reason: starts.some((s) => s.status === "cancelled") ? "cancelled by the caller" : chosen.reason,
+    reason: starts.some((s) => s.status === "cancelled") ? "cancelled on request" : chosen.reason,
     start: prepared.start,
+    startRms,
     iterations: iterationsBefore,
     elapsedMs: Date.now() - t0,
     document: prepared.withValues(chosen.values),

@@ -73,7 +73,7 @@ export function validateFitInput(
 export function validatePointCount(points: number, parameters: number, window?: [number, number]): void {
   if (points === 0) {
     throw new FitInputError(
-      window ? `fit: the window [${window[0]}, ${window[1]}] eV holds no reference band energies` : "fit: no reference energies overlap the model bands",
+      window ? `fit: the window [${window[0]}, ${window[1]}] eV holds no reference band energies` : "fit: no reference values are left to fit: the band offset, zero weights or missing values exclude them all",
     );
   }
   if (points <= parameters) {

@@ -25,6 +25,8 @@ export interface FitResult {
   cost: number;
   shift: number;
   points: number;
+  /** Unweighted RMS error at the start values (same points), to show what the fit gained. */
+  startRms: number;
   rms: number;
   maxAbs: number;
   perBand: BandError[];
@@ -47,6 +49,7 @@ export async function fitBandModel(
   if (first.energies.length !== reference.energies.length) throw new Error("fit: the model must be evaluated at the reference k-points");
   const { pairs } = selectWeightedPairs(first.energies, reference, opts);
   validatePointCount(pairs.length, P, opts.window);
+  const startRms = errorsOf(buildResiduals(first, pairs, reference, opts, P).r, pairs).rms;
   const lm = await minimiseLeastSquares(
     { evaluate: (p) => buildResiduals(model.evaluate(p), pairs, reference, opts, P), lower: bound(opts.lower, P, -Infinity), upper: bound(opts.upper, P, Infinity) },
     Float64Array.from(start),
@@ -66,6 +69,7 @@ export async function fitBandModel(
     iterations: lm.iterations,
     cost: lm.cost,
     shift: final.shift,
+    startRms,
     ...errorsOf(final.r, pairs),
     statistics: computeFitStatistics(final.r, final.jac, P),
     elapsedMs: Date.now() - t0,

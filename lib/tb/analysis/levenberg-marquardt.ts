@@ -97,7 +97,7 @@ export async function minimiseLeastSquares(problem: LeastSquaresProblem, start: 
       await yieldToEventLoop();
       lastYield = Date.now();
     }
-    if (opts.signal?.aborted) return done("cancelled", "cancelled by the caller", iter - 1);
+    if (opts.signal?.aborted) return done("cancelled", "cancelled on request", iter - 1);
     const { jtj, jtr } = normalEquations(m, n, cur.jac, cur.r);
     if (projectedGradientNorm(jtr, p, lower, upper) <= gtol) return done("converged", "gradient below tolerance", iter - 1);
     const scale = Float64Array.from({ length: n }, (_, i) => Math.max(jtj[i * n + i], 1e-30));

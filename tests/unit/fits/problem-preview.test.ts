@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { buildFitPreview } from "@/lib/fits/preview";
 import { buildFitProblem } from "@/lib/fits/problem";
 import { FitInputError } from "@/lib/tb/analysis/fit-input";
-import { spChainDocument } from "../tb/analysis/documents";
+import { sChainDocument, spChainDocument } from "../tb/analysis/documents";
 import { spec, storedReference } from "./helpers";
 
 const doc = spChainDocument();
@@ -83,5 +83,15 @@ describe("parameters the fit cannot determine", () => {
     const v = buildFitPreview(doc, ref, spec({ parameters: [{ key: "shell/A-A/1/pp_pi" }, { key: "onsite/A/s" }] }));
     expect(v.insensitive).toEqual(["shell/A-A/1/pp_pi"]);
     expect(buildFitPreview(doc, ref, spec({ parameters: free })).insensitive).toEqual([]);
+    expect(buildFitPreview(doc, ref, spec({ parameters: free })).undetermined).toBe(false);
+  });
+
+  it("names an on-site energy that a least-squares shift takes up (one band: ∂E/∂ε = 1 everywhere), but not without the shift", () => {
+    const chain = sChainDocument();
+    const ref = storedReference(chain);
+    const shifted = buildFitPreview(chain, ref, spec({ parameters: [{ key: "onsite/A/s" }, { key: "shell/A-A/1/ss_sigma" }], alignment: "least-squares" }));
+    expect([shifted.insensitive, shifted.undetermined]).toEqual([["onsite/A/s"], true]);
+    const plain = buildFitPreview(chain, ref, spec({ parameters: [{ key: "onsite/A/s" }, { key: "shell/A-A/1/ss_sigma" }] }));
+    expect([plain.insensitive, plain.undetermined]).toEqual([[], false]);
   });
 });

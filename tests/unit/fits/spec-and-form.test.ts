@@ -71,3 +71,19 @@ describe("the refit form", () => {
     ]);
   });
 });
+
+describe("messages in the form's words", () => {
+  it("names the field behind each server error and refuses hexadecimal and band weights beyond the reference", async () => {
+    const { describeFieldErrors, checkAgainstReference } = await import("@/lib/fits/form");
+    const spec = { referenceSetId: REFERENCE_ID, parameters: [{ key: "onsite/A/s" }, { key: "shell/A-A/1/ss_sigma" }], bandWeights: [{ band: 0, weight: 1 }, { band: 7, weight: 2 }] };
+    expect(describeFieldErrors({ "parameters.1.upper": ["lower bound is above the upper bound"], window: ["bad"], "bandWeights.0.weight": ["weights must be ≥ 0"] }, spec, { "shell/A-A/1/ss_sigma": "ss_sigma" })).toEqual([
+      "upper bound of ss_sigma: lower bound is above the upper bound",
+      "window: bad",
+      "band weight row 1: weights must be ≥ 0",
+    ]);
+    expect(checkAgainstReference(spec, 2)).toEqual(["band weight row 2: the reference has bands 0–1 only"]);
+    const form = initialFitForm(params, REFERENCE_ID);
+    form.rows[0] = { ...form.rows[0], free: true, lower: "0x10" };
+    expect(toFitSpec(form).errors).toEqual(['lower bound of ε(A, s): "0x10" is not a number']);
+  });
+});

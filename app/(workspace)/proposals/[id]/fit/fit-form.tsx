@@ -4,7 +4,7 @@ import { useMemo, useState } from "react";
 import { useSWRConfig } from "swr";
 import { FormMessage, inputClass, primaryButtonClass } from "@/app/_components/form-parts";
 import { fetchJson, type ApiError } from "@/lib/client-fetch";
-import { initialFitForm, toFitSpec, type FitFormState } from "@/lib/fits/form";
+import { checkAgainstReference, describeFieldErrors, initialFitForm, toFitSpec, type FitFormState } from "@/lib/fits/form";
 import { FitPreviewPanel, useFitPreview } from "./fit-preview-panel";
 import { ParameterTable } from "./parameter-table";
 import { useDebounced } from "./use-debounced";
@@ -31,7 +31,15 @@ export function FitForm({ proposalId, parameters, references, canStart }: {
   const [starting, setStarting] = useState(false);
   const { mutate } = useSWRConfig();
   const set = (patch: Partial<FitFormState>) => setState((s) => ({ ...s, ...patch }));
-  const { spec, errors } = useMemo(() => toFitSpec(state), [state]);
+  const labels = useMemo(() => Object.fromEntries(parameters.map((p) => [p.key, p.label])), [parameters]);
+  const current = useMemo(() => new Map(parameters.map((p) => [p.key, p.value])), [parameters]);
+  const bandCount = references.find((r) => r.id === state.referenceSetId)?.bands ?? Infinity;
+  const { spec, errors } = useMemo(() => {
+    const read = toFitSpec(state);
+    return { spec: read.spec, errors: [...read.errors, ...checkAgainstReference(read.spec, bandCount)] };
+  }, [state, bandCount]);
+  // Start values follow the latest revision (a finished refit may have saved a new one); the settings stay.
+  const rows = state.rows.map((r) => ({ ...r, value: current.get(r.key) ?? r.value }));
   const settled = useDebounced(errors.length === 0 ? spec : null, 400);
   const preview = useFitPreview(proposalId, settled);
   const window = spec.window ?? null;
@@ -53,6 +61,11 @@ export function FitForm({ proposalId, parameters, references, canStart }: {
   return (
     <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_minmax(0,40rem)]">
       <div className="min-w-0">
+        {canStart ? null : (
+          <p role="note" className="mb-4 rounded-md bg-paper-deep px-3 py-2 text-sm">
+            Preview only: try settings and see what would enter a fit. Only the proposal&apos;s author can start a refit, while the proposal is a draft or returned for revision.
+          </p>
+        )}
         <label className="mb-4 block">
           <span className="mb-1 block text-sm font-semibold">Reference band set</span>
           <select className={inputClass} value={state.referenceSetId} onChange={(e) => set({ referenceSetId: e.target.value })}>
@@ -64,7 +77,7 @@ export function FitForm({ proposalId, parameters, references, canStart }: {
           </select>
         </label>
         <h3 className="mb-2 text-sm font-semibold">Free parameters and bounds</h3>
-        <ParameterTable rows={state.rows} onChange={(rows) => set({ rows })} />
+        <ParameterTable rows={rows} onChange={(next) => set({ rows: next })} />
         <div className="mt-4 flex flex-wrap gap-4">
           <label className="text-sm">
             <span className="mb-1 block font-semibold">Band offset</span>
@@ -72,7 +85,7 @@ export function FitForm({ proposalId, parameters, references, canStart }: {
           </label>
           <label className="text-sm">
             <span className="mb-1 block font-semibold">Alignment</span>
-            <select className={small} value={state.alignment} onChange={(e) => set({ alignment: e.target.value as FitFormState["alignment"] })}>
+            <select className={small.replace("w-28", "w-56")} value={state.alignment} onChange={(e) => set({ alignment: e.target.value as FitFormState["alignment"] })}>
               <option value="none">none (same energy zero)</option>
               <option value="vbm">valence-band maxima</option>
               <option value="least-squares">least-squares shift</option>
@@ -116,11 +129,20 @@ export function FitForm({ proposalId, parameters, references, canStart }: {
       </div>
       <div className="min-w-0">
         <h3 className="mb-2 text-sm font-semibold">What enters the fit</h3>
-        <FitPreviewPanel preview={preview.data} error={preview.error} loading={preview.isLoading || preview.isValidating} localErrors={errors} window={window} />
+        <FitPreviewPanel
+          preview={preview.data}
+          error={preview.error}
+          loading={preview.isLoading || preview.isValidating}
+          localErrors={errors}
+          window={window}
+          regions={(spec.regionWeights ?? []).filter((r) => Number.isFinite(r.from) && Number.isFinite(r.to))}
+          labels={labels}
+          describeFields={(fieldErrors) => describeFieldErrors(fieldErrors, spec, labels)}
+        />
         <div className="mt-4">
           {message ? <FormMessage kind={message.kind}>{message.text}</FormMessage> : null}
           {canStart ? (
-            <button type="button" className={primaryButtonClass} disabled={starting || errors.length > 0 || Boolean(preview.error) || !preview.data} onClick={start}>
+            <button type="button" className={primaryButtonClass} disabled={starting || errors.length > 0 || Boolean(preview.error) || !preview.data || preview.data.undetermined} onClick={start}>
               {starting ? "Starting…" : "Start the refit"}
             </button>
           ) : (

@@ -1,7 +1,6 @@
 "use client";
 
 import useSWR from "swr";
-import { FormMessage } from "@/app/_components/form-parts";
 import { fetchJson, type ApiError } from "@/lib/client-fetch";
 import type { FitPreview } from "@/lib/fits/preview";
 import type { FitSpecInput } from "@/lib/fits/spec";
@@ -16,28 +15,44 @@ export function useFitPreview(proposalId: string, spec: FitSpecInput | null) {
   });
 }
 
-export function FitPreviewPanel({ preview, error, loading, localErrors, window }: {
+function Problems({ lines }: { lines: string[] }) {
+  return (
+    <div role="status" className="mb-3 rounded-md bg-danger-pale px-3 py-2 text-sm text-danger" data-testid="fit-preview-error">
+      {lines.length === 1 ? (
+        lines[0]
+      ) : (
+        <ul className="list-disc pl-5">
+          {lines.map((l) => (
+            <li key={l}>{l}</li>
+          ))}
+        </ul>
+      )}
+    </div>
+  );
+}
+
+export function FitPreviewPanel({ preview, error, loading, localErrors, window, regions, labels, describeFields }: {
   preview: FitPreview | undefined;
   error: ApiError | undefined;
   loading: boolean;
   localErrors: string[];
   window: [number, number] | null;
+  regions: { from: number; to: number; weight: number }[];
+  labels: Record<string, string>;
+  describeFields: (fieldErrors: Record<string, string[]>) => string[];
 }) {
-  if (localErrors.length > 0) {
-    return (
-      <FormMessage kind="error">
-        <span data-testid="fit-preview-error">{localErrors.join("; ")}.</span>
-      </FormMessage>
-    );
-  }
+  const problems = localErrors.length
+    ? localErrors
+    : error
+      ? error.fieldErrors && Object.keys(error.fieldErrors).length
+        ? describeFields(error.fieldErrors)
+        : [error.message]
+      : [];
+  const named = (keys: string[]) => keys.map((k) => labels[k] ?? k).join(", ");
   return (
     <div aria-busy={loading}>
-      {error ? (
-        <FormMessage kind="error">
-          <span data-testid="fit-preview-error">{error.message}</span>
-        </FormMessage>
-      ) : null}
-      {preview && !error ? (
+      {problems.length ? <Problems lines={problems} /> : null}
+      {preview && !problems.length ? (
         <>
           <p className="mb-2 text-sm" data-testid="fit-preview-summary" role="status">
             <strong className="num">{preview.points}</strong> reference values at <strong className="num">{preview.kPoints}</strong> k-points enter the fit
@@ -45,13 +60,21 @@ export function FitPreviewPanel({ preview, error, loading, localErrors, window }
             <span className="num">{preview.excluded}</span> are left out. Alignment shift at the start:{" "}
             <span className="num">{preview.shift.toFixed(3)}</span> eV.
           </p>
-          {preview.insensitive.length > 0 ? (
+          {preview.undetermined ? (
             <p role="note" className="mb-2 rounded-md bg-danger-pale px-3 py-2 text-sm text-danger" data-testid="fit-preview-insensitive">
-              No value in the fit depends on {preview.insensitive.join(", ")} at the start values, so the fit cannot determine{" "}
-              {preview.insensitive.length === 1 ? "it" : "them"} (no uncertainty can be given). Fix {preview.insensitive.length === 1 ? "it" : "them"}, or widen the window or bands.
+              {preview.insensitive.length
+                ? `No value in the fit changes with ${named(preview.insensitive)} (by symmetry, or because the alignment shift takes the change up), so the fit cannot determine ${preview.insensitive.length === 1 ? "it" : "them"}. Fix ${preview.insensitive.length === 1 ? "it" : "them"} to start.`
+                : "Some combination of the free parameters changes no value in the fit, so the fit cannot determine them all. Fix one of the parameters that act together to start."}
             </p>
           ) : null}
-          <FitPreviewPlot plot={preview.plot} window={window} />
+          <FitPreviewPlot plot={preview.plot} window={window} regions={regions} />
+          <ul className="mt-1 flex flex-wrap gap-x-4 text-xs text-ink-soft" aria-label="Legend of the preview">
+            <li>● violet: in the fit (darker = heavier weight)</li>
+            <li>○ grey: left out</li>
+            <li>┄ slate: model bands at the start values</li>
+            {window ? <li>┄ copper: window</li> : null}
+            {regions.length ? <li>▮ shaded: weighted regions</li> : null}
+          </ul>
           {preview.plot.stride > 1 ? <p className="text-xs text-ink-soft">Every {preview.plot.stride}th value is drawn; the counts include all.</p> : null}
           <table className="mt-3 w-full text-sm">
             <caption className="sr-only">Bands in the fit</caption>
@@ -76,7 +99,7 @@ export function FitPreviewPanel({ preview, error, loading, localErrors, window }
           </table>
         </>
       ) : null}
-      {!preview && !error ? <p className="text-sm text-ink-soft">Working out which values enter the fit…</p> : null}
+      {!preview && !problems.length ? <p className="text-sm text-ink-soft">Working out which values enter the fit…</p> : null}
     </div>
   );
 }

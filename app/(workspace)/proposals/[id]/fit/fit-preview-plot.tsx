@@ -3,13 +3,14 @@ import type { FitPreview } from "@/lib/fits/preview";
 
 const W = 640;
 const H = 360;
-const M = { left: 52, right: 12, top: 12, bottom: 30 };
+const M = { left: 52, right: 12, top: 12, bottom: 34 };
 
 /**
- * Which reference values enter the fit: filled copper dots (darker = more weight), hollow grey dots for values left
- * out, the model's bands at the start values as lines, and the window as dashed lines.
+ * Which reference values enter the fit: filled violet dots (darker = more weight), hollow grey dots for values left
+ * out, the model's bands at the start values as dashed lines, the window as copper dashed lines, weighted regions
+ * shaded, and the path's high-symmetry points on the axis.
  */
-export function FitPreviewPlot({ plot, window }: { plot: FitPreview["plot"]; window: [number, number] | null }) {
+export function FitPreviewPlot({ plot, window, regions }: { plot: FitPreview["plot"]; window: [number, number] | null; regions: { from: number; to: number; weight: number }[] }) {
   const energies = [...plot.included.map((p) => p[1]), ...plot.excluded.map((p) => p[1])];
   const [lo, hi] = energyExtent([[energies], plot.model]);
   const d0 = Math.min(...plot.distance);
@@ -26,6 +27,17 @@ export function FitPreviewPlot({ plot, window }: { plot: FitPreview["plot"]; win
           <line x1={M.left} x2={W - M.right} y1={y(e)} y2={y(e)} stroke="var(--color-rule)" strokeWidth={0.6} />
           <text x={M.left - 6} y={y(e) + 4} textAnchor="end" fontSize={11} className="num" fill="var(--color-ink-soft)">
             {e}
+          </text>
+        </g>
+      ))}
+      {regions.map((r, i) => (
+        <rect key={`r${i}`} x={x(Math.max(r.from, d0))} width={Math.max(0, x(Math.min(r.to, d1)) - x(Math.max(r.from, d0)))} y={M.top} height={H - M.bottom - M.top} fill="var(--color-copper-pale)" fillOpacity={0.6} />
+      ))}
+      {plot.ticks.map((t, i) => (
+        <g key={`t${i}`}>
+          <line x1={x(t.distance)} x2={x(t.distance)} y1={M.top} y2={H - M.bottom} stroke="var(--color-rule)" strokeWidth={0.8} />
+          <text x={x(t.distance)} y={H - M.bottom + 14} textAnchor="middle" fontSize={12} fill="var(--color-ink)">
+            {t.label}
           </text>
         </g>
       ))}
@@ -46,13 +58,13 @@ export function FitPreviewPlot({ plot, window }: { plot: FitPreview["plot"]; win
         <circle key={`x${i}`} cx={x(d)} cy={y(e)} r={1.8} fill="none" stroke="var(--color-ink-soft)" strokeOpacity={0.45} strokeWidth={0.7} />
       ))}
       {plot.included.map(([d, e, w], i) => (
-        <circle key={`i${i}`} cx={x(d)} cy={y(e)} r={2} fill="var(--color-copper-deep)" fillOpacity={0.25 + 0.75 * (w / maxW)} />
+        <circle key={`i${i}`} cx={x(d)} cy={y(e)} r={2} fill="var(--color-violet-dot)" fillOpacity={0.35 + 0.65 * (w / maxW)} />
       ))}
       <text x={12} y={M.top + 4} fontSize={11} fill="var(--color-ink-soft)" transform={`rotate(-90 12 ${M.top + 4})`} textAnchor="end">
         E (eV)
       </text>
-      <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize={11} fill="var(--color-ink-soft)">
-        position along the default path (1/Å)
+      <text x={W - M.right} y={H - 4} textAnchor="end" fontSize={10} fill="var(--color-ink-soft)">
+        {`path position, 1/Å: ${d0.toFixed(2)} … ${d1.toFixed(2)}`}
       </text>
     </svg>
   );

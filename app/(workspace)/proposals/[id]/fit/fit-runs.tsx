@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import useSWR from "swr";
 import { CostHistoryPlot } from "@/app/_components/cost-history-plot";
 import { FormMessage } from "@/app/_components/form-parts";
@@ -38,8 +38,17 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
   const url = `/api/proposals/${proposalId}/fits`;
   const { data, error, mutate } = useSWR<{ fits: FitRunView[] }, ApiError>(url, (u: string) => fetchJson<{ fits: FitRunView[] }>(u), {
     refreshInterval: (latest) => (latest?.fits.some((f) => f.active) ? 1000 : 0),
+    dedupingInterval: 500,
   });
   const router = useRouter();
+  // A run that saved a revision changes the page around the list (start revision, values, version): reload it.
+  const saved = useRef<Set<string> | null>(null);
+  useEffect(() => {
+    if (!data) return;
+    const now = new Set(data.fits.filter((f) => f.resultRevision !== null).map((f) => f.id));
+    if (saved.current && [...now].some((id) => !saved.current?.has(id))) router.refresh();
+    saved.current = now;
+  }, [data, router]);
   const [message, setMessage] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
 
   async function act(fit: FitRunView, action: "cancel" | "rerun" | "apply") {
@@ -96,7 +105,7 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
               </div>
               <span className="num text-xs" data-testid="fit-progress-text">
                 iteration {f.iteration}
-                {f.cost !== null ? ` · cost ${f.cost.toExponential(3)} eV²` : ""} · {seconds(f.elapsedMs)}
+                {f.cost !== null ? ` · best cost ${f.cost.toExponential(3)} eV²` : ""} · {seconds(f.elapsedMs)}
               </span>
               <CostHistoryPlot history={f.history} title="cost per iteration" compact />
             </div>
@@ -106,7 +115,8 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
             {f.cancelRequested && f.active ? <p className="mt-1 text-xs text-ink-soft">Cancelling: the fit stops at its next step and keeps its best point.</p> : null}
             {f.rms !== null ? (
               <p className="num mt-1 text-xs">
-                RMS {(f.rms * 1000).toFixed(2)} meV · max {(f.maxAbs! * 1000).toFixed(2)} meV{f.reason ? ` · ${f.reason}` : ""}
+                RMS {f.startRms !== null ? `${(f.startRms * 1000).toFixed(2)} → ` : ""}
+                {(f.rms * 1000).toFixed(2)} meV · max {(f.maxAbs! * 1000).toFixed(2)} meV{f.reason ? ` · ${f.reason}` : ""}
               </p>
             ) : null}
             {f.resultRevision !== null ? (

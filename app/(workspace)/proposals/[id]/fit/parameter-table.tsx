@@ -42,7 +42,7 @@ export function ParameterTable({ rows, onChange }: { rows: FitParameterRow[]; on
                 <td>
                   {r.label} <span className="block text-xs text-ink-soft">{r.key}</span>
                 </td>
-                <td className="num text-right">{r.value}</td>
+                <td className="num text-right">{Number(r.value.toPrecision(6))}</td>
                 <td className="text-right">
                   <input className={cell} value={r.lower} disabled={!r.free} onChange={(e) => set(i, { lower: e.target.value })} aria-label={`lower bound of ${r.label}`} placeholder="none" />
                 </td>

@@ -4,6 +4,7 @@ import { loadFitContext } from "@/lib/fits/context";
 import { buildFitQuality } from "@/lib/fits/quality";
 import { getFitOfRevision } from "@/lib/fits/queries";
 import { describeFitWeights } from "@/lib/fits/result-document";
+import { parameterLabels } from "@/lib/tb/parameters";
 import type { ModelDocument } from "@/lib/tb/document";
 import { FitQualityFigures } from "../fits/[fitId]/fit-quality";
 import { ParameterResults } from "../fits/[fitId]/parameter-results";
@@ -21,14 +22,14 @@ export async function FitOriginSection({ proposalId, revisionId, revisionNumber,
     <Section title="How these numbers were obtained">
     <div data-testid="fit-origin">
       <p className="mb-3 text-sm">
-        Revision {revisionNumber} is the result of a refit of revision {row.baseRevisionNumber} to “{row.referenceName}” by {row.startedByName}: {outcome.names.length} free parameters,{" "}
+        Revision {revisionNumber} is the result of a refit of revision {row.baseRevisionNumber} to “{row.referenceName}” by {row.startedByName}: {outcome.names.length} free parameter{outcome.names.length === 1 ? "" : "s"},{" "}
         {spec(run.spec.window)}, {describeFitWeights(run.spec)}; RMS <span className="num">{(outcome.rms * 1000).toFixed(2)}</span> meV, max{" "}
         <span className="num">{(outcome.maxAbs * 1000).toFixed(2)}</span> meV over {outcome.points} values, {outcome.status} in {outcome.iterations} iterations.{" "}
         <Link href={`/proposals/${proposalId}/fits/${run.id}`} className="text-copper-deep underline">
           Full fit record (inputs, cost history, correlations, re-runs) →
         </Link>
       </p>
-      <ParameterResults outcome={outcome} spec={run.spec} />
+      <ParameterResults outcome={outcome} spec={run.spec} labels={parameterLabels(ctx.document)} />
       <div className="mt-4">
         <FitQualityFigures quality={quality} referenceName={row.referenceName} />
       </div>

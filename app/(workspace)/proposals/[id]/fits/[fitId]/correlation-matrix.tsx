@@ -1,6 +1,5 @@
 /** Parameter correlations: strong ones (|r| near 1) mean the reference barely tells those parameters apart. */
-export function CorrelationMatrix({ names, correlations }: { names: string[]; correlations: number[][] }) {
-  const short = (key: string) => key.split("/").slice(-2).join("/");
+export function CorrelationMatrix({ names, correlations, labels }: { names: string[]; correlations: number[][]; labels: Record<string, string> }) {
   return (
     <div className="overflow-auto">
       <table className="text-xs">
@@ -8,9 +7,9 @@ export function CorrelationMatrix({ names, correlations }: { names: string[]; co
         <thead>
           <tr>
             <th />
-            {names.map((n) => (
-              <th key={n} className="num px-1 font-normal text-ink-soft" title={n}>
-                {short(n)}
+            {names.map((n, j) => (
+              <th key={n} className="num px-1 font-normal text-ink-soft" title={labels[n] ?? n}>
+                {j + 1}
               </th>
             ))}
           </tr>
@@ -18,8 +17,8 @@ export function CorrelationMatrix({ names, correlations }: { names: string[]; co
         <tbody>
           {correlations.map((row, i) => (
             <tr key={names[i]}>
-              <th className="num pr-2 text-left font-normal text-ink-soft" title={names[i]}>
-                {short(names[i])}
+              <th className="pr-2 text-left font-normal text-ink-soft" title={names[i]}>
+                <span className="num">{i + 1}</span> {labels[names[i]] ?? names[i]}
               </th>
               {row.map((r, j) => (
                 <td

@@ -14,6 +14,7 @@ import { getFitRun, listReruns } from "@/lib/fits/queries";
 import { compareReproduction } from "@/lib/fits/reproduce";
 import { describeFitWeights, fittedDocument, fittedEnergyRange } from "@/lib/fits/result-document";
 import { fitRunView } from "@/lib/fits/view";
+import { parameterLabels } from "@/lib/tb/parameters";
 import { ProposalHeading } from "../../proposal-heading";
 import { Section } from "../../section";
 import { CorrelationMatrix } from "./correlation-matrix";
@@ -46,6 +47,7 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
     ...reruns.flatMap((r) => (r.run.outcome && outcome ? [{ label: `re-run by ${r.startedByName}`, id: r.run.id, result: compareReproduction(outcome, r.run.outcome, r.run.engineVersion === run.engineVersion) }] : [])),
   ];
   const spec = run.spec;
+  const labels = parameterLabels(ctx.document);
   return (
     <>
       <Link href={`/proposals/${id}/fit`} className="text-sm text-copper-deep underline">
@@ -123,12 +125,12 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
         {outcome ? (
           <>
             <Section title="Parameters">
-              <ParameterResults outcome={outcome} spec={spec} />
+              <ParameterResults outcome={outcome} spec={spec} labels={labels} />
               {!outcome.standardErrors ? <p className="mt-2 text-sm text-danger">Uncertainties could not be estimated: the reference does not determine every free parameter (JᵀJ is singular).</p> : null}
             </Section>
             {outcome.correlations && outcome.names.length > 1 ? (
               <Section title="Correlations">
-                <CorrelationMatrix names={outcome.names} correlations={outcome.correlations} />
+                <CorrelationMatrix names={outcome.names} correlations={outcome.correlations} labels={labels} />
               </Section>
             ) : null}
             <Section title="Fit quality">

@@ -2,7 +2,7 @@ import type { FitOutcome } from "@/lib/fits/record";
 import type { FitSpec } from "@/lib/fits/spec";
 
 /** Start → fitted value per parameter, with its standard error and whether it ended on a bound. */
-export function ParameterResults({ outcome, spec }: { outcome: FitOutcome; spec: FitSpec }) {
+export function ParameterResults({ outcome, spec, labels }: { outcome: FitOutcome; spec: FitSpec; labels: Record<string, string> }) {
   return (
     <table className="w-full text-sm">
       <caption className="sr-only">Fitted parameters</caption>
@@ -24,10 +24,12 @@ export function ParameterResults({ outcome, spec }: { outcome: FitOutcome; spec:
           const se = outcome.standardErrors?.[i];
           return (
             <tr key={name} className="border-t border-rule" data-testid="fit-parameter">
-              <td className="num py-1">{name}</td>
+              <td className="py-1">
+                {labels[name] ?? name} <span className="num block text-xs text-ink-soft">{name}</span>
+              </td>
               <td className="num text-right">{outcome.start[i].toPrecision(6)}</td>
               <td className="num text-right font-semibold">{v.toPrecision(6)}</td>
-              <td className="num text-right">{(v - outcome.start[i]).toPrecision(3)}</td>
+              <td className="num text-right">{(v - outcome.start[i]).toFixed(6)}</td>
               <td className="num text-right">{se === undefined ? "—" : se.toPrecision(2)}</td>
               <td className="num pl-3 text-xs">
                 [{p?.lower ?? "−∞"}, {p?.upper ?? "+∞"}]{atBound ? <strong className="ml-1 text-danger">on a bound</strong> : null}
