@@ -148,8 +148,10 @@ describe("refit input, preview and roles", () => {
     };
     await refused(chainSpec(few.referenceId), 422, /4 reference points for 5 free parameters/);
     await refused(chainSpec(referenceId, { window: [100, 200] }), 422, /window \[100, 200\] eV holds no reference band energies/);
-    await refused({ referenceSetId: referenceId, parameters: [{ key: "onsite/A/s", lower: -4.5 }] }, 422, /start value -4\.6 of onsite\/A\/s lies outside its bounds \[-4\.5, Infinity\]/);
+    await refused({ referenceSetId: referenceId, parameters: [{ key: "onsite/A/s", lower: -4.5 }] }, 422, /start value -4\.6 of ε\(A, s\) lies outside its bounds \[-4\.5, \+∞\]/);
     await refused({ referenceSetId: referenceId, parameters: [{ key: "onsite/A/dxy" }] }, 422, /unknown parameter key "onsite\/A\/dxy"/);
+    // pp_pi cannot act along the chain's own axis (Slater & Koster 1954, Table I, n = ±1): nothing can determine it.
+    await refused({ referenceSetId: referenceId, parameters: [{ key: "onsite/A/s" }, { key: "shell/A-A/1/pp_pi" }] }, 422, /No value in the fit changes with pp_pi \(A–A, shell 1\)/);
     // These two are caught by the settings' schema or the reference lookup: 400 with field errors (invalid input), not 422.
     await refused({ referenceSetId: referenceId, parameters: [{ key: "onsite/A/s", lower: -4, upper: -6 }] }, 400, /"parameters\.0\.upper":\["lower bound is above the upper bound"\]/);
     await refused(chainSpec(other.referenceId), 400, /not attached to this proposal/);
