@@ -42,9 +42,17 @@ export interface FitPreview {
   };
 }
 
+/** Ticks of the default path; two labels at one position (a jump, e.g. U then K) become one, "U|K". */
 function pathTicks(doc: ModelDocument): { distance: number; label: string }[] {
   const path = samplePath(doc);
-  return path.ticks.map((t) => ({ distance: path.distance[t.index], label: t.label }));
+  const out: { distance: number; label: string }[] = [];
+  for (const t of path.ticks) {
+    const distance = path.distance[t.index];
+    const last = out[out.length - 1];
+    if (last && last.distance === distance) last.label = `${last.label}|${t.label}`;
+    else out.push({ distance, label: t.label });
+  }
+  return out;
 }
 
 export function buildFitPreview(doc: ModelDocument, reference: StoredReference, spec: FitSpec): FitPreview {
