@@ -12,9 +12,9 @@ import { loadFitContext } from "@/lib/fits/context";
 import { buildFitQuality } from "@/lib/fits/quality";
 import { getFitRun, listReruns } from "@/lib/fits/queries";
 import { compareReproduction } from "@/lib/fits/reproduce";
-import { describeFitWeights, fittedDocument, fittedEnergyRange } from "@/lib/fits/result-document";
+import { describeFitWeights } from "@/lib/fits/result-document";
 import { fitRunView } from "@/lib/fits/view";
-import { parameterLabels } from "@/lib/tb/parameters";
+import { parameterLabels, setParameters } from "@/lib/tb/parameters";
 import { ProposalHeading } from "../../proposal-heading";
 import { Section } from "../../section";
 import { CorrelationMatrix } from "./correlation-matrix";
@@ -38,7 +38,8 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
   const fit = fitRunView(row);
   const ctx = await loadFitContext(db, id, run.referenceSetId, run.baseRevisionId);
   const outcome = run.outcome;
-  const fitted = outcome ? fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id, fittedEnergyRange(ctx.document, ctx.parsedReference, run.spec, outcome.shift)) : null;
+  // The plots need only the fitted values (the provenance the revision carries does not change a band).
+  const fitted = outcome ? setParameters(ctx.document, Object.fromEntries(outcome.names.map((k, i) => [k, outcome.values[i]]))) : null;
   const quality = outcome && fitted ? buildFitQuality(ctx.document, fitted, ctx.parsedReference, run.spec, outcome) : null;
   const original = run.rerunOf ? await getFitRun(db, run.rerunOf) : null;
   const reruns = await listReruns(db, run.id);
@@ -199,7 +200,7 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
             ))}
           </ul>
         </Section>
-        <SafetyNote validity={validityText(fitted ?? ctx.document)} />
+        <SafetyNote validity={validityText(ctx.document)} />
       </div>
     </>
   );
