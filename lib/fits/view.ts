@@ -1,4 +1,6 @@
 import type { FitRunRow } from "./queries";
+import { compareReproduction, type Reproduction } from "./reproduce";
+import { describeFitWeights } from "./result-document";
 import { ACTIVE_FIT_STATUSES, FIT_STATUS_LABEL, type CostPoint, type FitStatus } from "./record";
 
 /** A fit run as the pages and the API show it (JSON-safe). */
@@ -33,9 +35,19 @@ export interface FitRunView {
   createdAt: string;
   finishedAt: string | null;
   engineVersion: string;
+  /** Settings in a line: alignment, window, offset, weights, starts and seed, to tell runs apart. */
+  settings: string;
+  /** For a re-run whose original is known: whether it reproduced the original's values exactly. */
+  reproduced: Reproduction | null;
 }
 
-export function fitRunView(row: FitRunRow, now = Date.now()): FitRunView {
+function settingsLine(spec: FitRunRow["run"]["spec"]): string {
+  const window = spec.window ? `window ${spec.window[0]} to ${spec.window[1]} eV` : "every energy";
+  const starts = spec.restarts ? `${spec.restarts} extra start${spec.restarts === 1 ? "" : "s"}, seed ${spec.seed}` : `seed ${spec.seed}`;
+  return `${describeFitWeights(spec)}; ${window}; ${starts}`;
+}
+
+export function fitRunView(row: FitRunRow, now = Date.now(), original?: FitRunRow["run"] | null): FitRunView {
   const { run } = row;
   return {
     id: run.id,
@@ -66,5 +78,7 @@ export function fitRunView(row: FitRunRow, now = Date.now()): FitRunView {
     createdAt: run.createdAt.toISOString(),
     finishedAt: run.finishedAt?.toISOString() ?? null,
     engineVersion: run.engineVersion,
+    settings: settingsLine(run.spec),
+    reproduced: original?.outcome && run.outcome ? compareReproduction(original.outcome, run.outcome, original.engineVersion === run.engineVersion) : null,
   };
 }

@@ -131,6 +131,10 @@ describe("refit of the s + pz chain over HTTP", () => {
     expect(row.resultRevisionId).toBeNull();
     expect(row.applyNote).toMatch(/re-run .*not saved as a revision/);
     expect(await revisionCount(proposalId)).toBe(before);
+    // The runs list says so beside the re-run.
+    const { fits } = (await (await author.fetch(`/api/proposals/${proposalId}/fits`)).json()) as { fits: FitRunView[] };
+    expect(fits.find((f) => f.id === rerunId)?.reproduced).toEqual({ identical: true, maxDifference: 0, sameEngine: true });
+    expect(fits.find((f) => f.id === fitId)?.reproduced).toBeNull();
   });
 });
 

@@ -70,8 +70,12 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
   if (error) return <FormMessage kind="error">{error.message}</FormMessage>;
   if (!data) return <p className="text-sm text-ink-soft">Loading refits…</p>;
   if (data.fits.length === 0) return <p className="text-sm text-ink-soft">No refits yet.</p>;
+  const newest = data.fits[0];
   return (
     <div>
+      <p className="sr-only" aria-live="polite">
+        {`Newest refit: ${newest.statusLabel}${newest.resultRevision !== null ? `, saved as revision ${newest.resultRevision}` : ""}.`}
+      </p>
       {message ? <FormMessage kind={message.kind}>{message.text}</FormMessage> : null}
       <ol className="space-y-3" aria-label="Refits of this proposal">
         {data.fits.map((f) => (
@@ -109,6 +113,13 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
               </span>
               <CostHistoryPlot history={f.history} title="cost per iteration" compact />
             </div>
+            <p className="mt-1 text-xs text-ink-soft">{f.settings}</p>
+            {f.reproduced ? (
+              <p className={`mt-1 text-xs ${f.reproduced.identical ? "text-ok" : "text-danger"}`} data-testid="fit-reproduced">
+                {f.reproduced.identical ? "Reproduces the original fit: identical values ✓" : `Differs from the original fit by up to ${f.reproduced.maxDifference.toExponential(2)} eV`}
+                {f.reproduced.sameEngine ? "" : " (different engine version)"}
+              </p>
+            ) : null}
             {f.status === "running" && f.heartbeatAgeMs !== null && f.heartbeatAgeMs > SILENT_MS ? (
               <p className="mt-1 text-xs text-danger">No word from its worker for {seconds(f.heartbeatAgeMs)}; if the worker stopped, the refit is retried on another one.</p>
             ) : null}

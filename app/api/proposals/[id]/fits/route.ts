@@ -13,7 +13,9 @@ export const GET = handleRoute(async (_request: Request, { params }: { params: P
   const proposalId = parseIdParam((await params).id, "proposal");
   await requireRole(...BOARD_ROLES);
   const rows = await listFitRuns(db, proposalId);
-  return Response.json({ fits: rows.map((r) => fitRunView(r)) });
+  const byId = new Map(rows.map((r) => [r.run.id, r.run]));
+  const now = Date.now();
+  return Response.json({ fits: rows.map((r) => fitRunView(r, now, r.run.rerunOf ? byId.get(r.run.rerunOf) : null)) });
 });
 
 /** POST /api/proposals/:id/fits {fit settings} — starts a refit as a background job (author, draft or revision stage). */

@@ -16,7 +16,7 @@ export function FitQualityFigures({ quality, referenceName }: { quality: FitQual
           { role: "reference", label: `reference: ${referenceName}`, energies: quality.reference.energies, distance: quality.reference.distance },
         ]}
       />
-      <ResidualPlot residuals={quality.residuals} distance={quality.distance} title="Residuals of the fit along the path" />
+      <ResidualPlot residuals={quality.residuals} distance={quality.distance} ticks={quality.ticks} title="Residuals of the fit along the path" />
     </div>
   );
 }

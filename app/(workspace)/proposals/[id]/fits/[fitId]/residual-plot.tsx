@@ -5,7 +5,7 @@ const H = 180;
 const M = { left: 56, right: 16, top: 10, bottom: 28 };
 
 /** Fitted − reference (meV) at every value in the fit, along the path: where the fit is good and where it is not. */
-export function ResidualPlot({ residuals, distance, title }: { residuals: [number, number, number][]; distance: number[]; title: string }) {
+export function ResidualPlot({ residuals, distance, ticks, title }: { residuals: [number, number, number][]; distance: number[]; ticks: { index: number; label: string }[]; title: string }) {
   const meV = residuals.map((r) => r[1] * 1000);
   const top = Math.max(1e-3, ...meV.map(Math.abs)) * 1.1;
   const x = linearScale([distance[0] ?? 0, distance[distance.length - 1] ?? 1], [M.left, W - M.right]);
@@ -20,6 +20,16 @@ export function ResidualPlot({ residuals, distance, title }: { residuals: [numbe
             <text x={M.left - 6} y={y(t) + 4} textAnchor="end" fontSize={11} className="num" fill="var(--color-ink-soft)">
               {Math.abs(t) < 1e-9 ? 0 : t}
             </text>
+          </g>
+        ))}
+        {ticks.map((t, i) => (
+          <g key={`t${i}`}>
+            <line x1={x(distance[t.index])} x2={x(distance[t.index])} y1={M.top} y2={H - M.bottom} stroke="var(--color-rule)" strokeWidth={0.8} />
+            {i > 0 && distance[ticks[i - 1].index] === distance[t.index] ? null : (
+              <text x={x(distance[t.index])} y={H - M.bottom + 14} textAnchor="middle" fontSize={11} fill="var(--color-ink)">
+                {ticks.filter((u) => distance[u.index] === distance[t.index]).map((u) => u.label).join("|")}
+              </text>
+            )}
           </g>
         ))}
         {residuals.map(([d], i) => (
