@@ -5,7 +5,8 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib.sh
 
-TEST_PG_PORT=54339
+# Ports can be moved (e.g. to run two checkouts side by side on one machine).
+TEST_PG_PORT="${TEST_PG_PORT:-54339}"
 install_cleanup
 
 ensure_node_modules
@@ -15,9 +16,9 @@ pg_up "$PWD/.data/pg-test" "$TEST_PG_PORT"
 recreate_database "$TEST_PG_PORT" bandgate_test
 export DATABASE_URL="postgres://postgres@127.0.0.1:$TEST_PG_PORT/bandgate_test"
 export NEXTAUTH_SECRET="test-secret-not-for-production-use-0123456789"
-export E2E_PORT=3100
+export E2E_PORT="${E2E_PORT:-3100}"
 export NEXTAUTH_URL="http://127.0.0.1:$E2E_PORT" APP_URL="http://127.0.0.1:$E2E_PORT"
-export SMTP_HOST=127.0.0.1 SMTP_PORT=2535 MAIL_FROM="Bandgate test <bandgate@test.invalid>"
+export SMTP_HOST=127.0.0.1 SMTP_PORT="${TEST_SMTP_PORT:-2535}" MAIL_FROM="Bandgate test <bandgate@test.invalid>"
 export BANDGATE_ENV=test
 
 npx tsx db/migrate.ts
