@@ -4,7 +4,7 @@ import { parseModelDocument, type ModelDocument } from "@/lib/tb/document";
 import { createEigenWorkspace, eigvalsHermitian } from "@/lib/tb/eigen";
 import { fillHamiltonian, fillHamiltonianLower } from "@/lib/tb/hamiltonian";
 import { compileModel, type CompiledModel } from "@/lib/tb/model";
-import { seededRandom } from "./helpers/seeded-random";
+import { seededUniform } from "@/lib/tb/analysis/seeded-uniform";
 import { GALLIUM_ARSENIDE, voglDocument } from "./helpers/vogl-1983";
 
 /*
@@ -24,7 +24,7 @@ const models = (): [string, CompiledModel][] => [
   ["diamond sp3s* (3-d)", compileModel(demo("demo-diamond-sp3s"))],
   ["GaAs sp3s* with spin–orbit", compileModel(parseModelDocument(withSpinOrbit()))],
 ];
-const rand = seededRandom(2024);
+const rand = seededUniform(2024);
 
 describe("lower-triangle H(k) build", () => {
   it.each(models())("%s: lower triangle equals the full build bit for bit, zeros above", (_, m) => {

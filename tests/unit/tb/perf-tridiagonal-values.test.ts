@@ -1,7 +1,7 @@
 import { EigenvalueDecomposition, Matrix } from "ml-matrix";
 import { describe, expect, it } from "vitest";
 import { tridiagonalEigenvalues } from "@/lib/tb/eigen-tridiagonal-ql";
-import { seededRandom } from "./helpers/seeded-random";
+import { seededUniform } from "@/lib/tb/analysis/seeded-uniform";
 
 /*
  * The root-free QL step computes γ and the next p from one reciprocal 1/(p·t), falling back to plain divisions
@@ -12,7 +12,7 @@ import { seededRandom } from "./helpers/seeded-random";
  */
 
 const EPS = Number.EPSILON;
-const rand = seededRandom(99);
+const rand = seededUniform(99);
 
 function reference(diag: number[], off: number[]): number[] {
   const n = diag.length;

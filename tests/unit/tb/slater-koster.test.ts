@@ -6,9 +6,9 @@ import { BOND_KEYS } from "@/lib/tb/orbitals";
 import { slaterKosterElement } from "@/lib/tb/slater-koster";
 import { ALL_ORBITALS, bondFrameElement } from "./helpers/bond-frame";
 import { buildDocument, FCC } from "./helpers/build-document";
-import { seededRandom } from "./helpers/seeded-random";
+import { seededUniform } from "@/lib/tb/analysis/seeded-uniform";
 
-const rand = seededRandom(1954);
+const rand = seededUniform(1954);
 const integrals: Record<string, number> = Object.fromEntries(BOND_KEYS.map((k) => [k, rand() * 4 - 2]));
 const integral = (k: string) => integrals[k];
 

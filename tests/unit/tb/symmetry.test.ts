@@ -5,11 +5,11 @@ import { parseModelDocument, type ModelDocument } from "@/lib/tb/document";
 import { fillHamiltonian } from "@/lib/tb/hamiltonian";
 import { compileModel } from "@/lib/tb/model";
 import { buildDocument } from "./helpers/build-document";
-import { seededRandom } from "./helpers/seeded-random";
+import { seededUniform } from "@/lib/tb/analysis/seeded-uniform";
 import { GALLIUM_ARSENIDE, voglDocument } from "./helpers/vogl-1983";
 
 const demo = (name: string) => parseModelDocument(JSON.parse(readFileSync(`db/seed/models/${name}.json`, "utf8")));
-const rand = seededRandom(7);
+const rand = seededUniform(7);
 const randomK = (d: number) => Array.from({ length: d }, () => rand() - 0.5);
 
 function withSpinOrbit(): ModelDocument {

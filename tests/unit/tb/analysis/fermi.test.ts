@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { findFermiLevel } from "@/lib/tb/analysis/fermi";
-import { erfc } from "@/lib/tb/analysis/gaussian";
+import { gaussianOccupation } from "@/lib/tb/analysis/gaussian";
 import { monkhorstPackMesh } from "@/lib/tb/analysis/mesh";
 import { chainBand } from "./band-models";
 
@@ -11,12 +11,16 @@ const t = -1;
 const mesh = monkhorstPackMesh([4000]);
 const energies = mesh.kFrac.map(chainBand(eps, t));
 
-describe("erfc", () => {
-  it("matches tabulated values (Abramowitz & Stegun (1964), Table 7.1)", () => {
-    expect(erfc(0)).toBeCloseTo(1, 7);
-    expect(erfc(0.5)).toBeCloseTo(1 - 0.5204998778, 7);
-    expect(erfc(1)).toBeCloseTo(1 - 0.8427007929, 7);
-    expect(erfc(-1)).toBeCloseTo(1.8427007929, 7);
+describe("Gaussian occupation", () => {
+  // ½·erfc(x) at e − μ = √2·σ·x, against erf tabulated to 10 digits (Abramowitz & Stegun (1964), Table 7.1).
+  const sigma = 0.05;
+  const at = (x: number) => gaussianOccupation(Math.SQRT2 * sigma * x, 0, sigma);
+  it("matches tabulated values", () => {
+    expect(at(0)).toBeCloseTo(0.5, 10);
+    expect(at(0.5)).toBeCloseTo(0.5 * (1 - 0.5204998778), 10);
+    expect(at(1)).toBeCloseTo(0.5 * (1 - 0.8427007929), 10);
+    expect(at(-1)).toBeCloseTo(0.5 * 1.8427007929, 10);
+    expect(at(2)).toBeCloseTo(0.5 * (1 - 0.9953222650), 10);
   });
 });
 
