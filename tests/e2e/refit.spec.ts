@@ -43,7 +43,8 @@ test("an author starts a refit, watches it advance, cancels it, lets another fin
 
   // Reviewers see how the numbers were obtained, and the metrics follow the window they pick.
   await page.getByRole("link", { name: /Open the review workspace/ }).click();
-  await expect(page.getByTestId("fit-origin")).toContainText("Revision 3 is the result of a refit of revision 2");
+  // A first view computes the band view and metrics; on a busy machine that is slower than the default 10 s wait.
+  await expect(page.getByTestId("fit-origin")).toContainText("Revision 3 is the result of a refit of revision 2", { timeout: 60_000 });
   await expect(page.getByRole("img", { name: /Bands at the start values \(dashed\) and fitted \(solid\)/ })).toBeVisible();
   const compared = page.locator("#metric-points td").nth(1);
   const before = await compared.innerText();

@@ -46,7 +46,9 @@ describe("release events whose job was lost", () => {
     await waitFor("the lost event to be fanned out", async () => (await db.select().from(releaseEvents).where(eq(releaseEvents.id, lost)))[0].fannedOutAt);
     await waitFor("the second e-mail", async () => (await mailTo(follower.email)).length === 2);
     expect(await requeueUnsentReleaseEvents(boss, 5 * 60_000)).not.toContain(lost);
-    await new Promise((r) => setTimeout(r, 1500));
+    // Nothing more is on its way once the event and mail queues hold no waiting or running job.
+    const pending = async () => (await boss.getQueueSize(QUEUES.releaseEvent, { before: "completed" })) + (await boss.getQueueSize(QUEUES.registryMail, { before: "completed" }));
+    await waitFor("the event and mail queues to drain", async () => (await pending()) === 0);
     expect(await mailTo(follower.email)).toHaveLength(2);
     // The recent one is not lost yet; mark it so the worker's own sweep leaves the shared test database quiet.
     await db.update(releaseEvents).set({ fannedOutAt: new Date() }).where(eq(releaseEvents.id, recent));
