@@ -2,15 +2,20 @@ import "server-only";
 import { z } from "zod";
 import { serverEnv } from "./env";
 import { AppError, fieldErrorsOf, toErrorResponse } from "./errors";
+import { findNul, NUL_MESSAGE } from "./pg-text";
 import { assertSameOriginJson, originsOf } from "./request-guard";
 
-/** The JSON body, unvalidated (for services that validate it themselves); bad JSON is a 400. */
+/** The JSON body, unvalidated (for services that validate it themselves); bad JSON or a NUL in any text is a 400. */
 export async function readJsonBody(request: Request): Promise<unknown> {
+  let body: unknown;
   try {
-    return await request.json();
+    body = await request.json();
   } catch {
     throw new AppError("invalid:json", "The request body is not valid JSON.");
   }
+  const nulAt = findNul(body);
+  if (nulAt !== null) throw new AppError("invalid:input", NUL_MESSAGE, { [nulAt]: [NUL_MESSAGE] });
+  return body;
 }
 
 /** Parse a JSON request body with zod; bad JSON or a bad shape is a 400 with field errors. */

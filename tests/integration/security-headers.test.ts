@@ -56,7 +56,8 @@ describe("security headers", () => {
     expect(csp.get("script-src")).not.toContain("'unsafe-inline'");
     expect(csp.get("script-src")).not.toContain("'unsafe-eval'");
     expect(csp.get("style-src")).toEqual(["'self'", "'unsafe-inline'"]);
-    expect(csp.get("img-src")).toEqual(["'self'", "data:"]);
+    // blob: is for the band plot's PNG export (the SVG is drawn through an image).
+    expect(csp.get("img-src")).toEqual(["'self'", "data:", "blob:"]);
     expect(csp.get("frame-ancestors")).toEqual(["'none'"]);
     expect(csp.get("object-src")).toEqual(["'none'"]);
     expect(csp.get("base-uri")).toEqual(["'self'"]);
