@@ -6,6 +6,7 @@ import { serverEnv } from "@/lib/env";
 import { sendMail } from "@/mail/send";
 import type { MailMessage } from "@/mail/templates";
 import { decisionMail, mentionMail, revisionSubmittedMail, reviewerAssignedMail, verdictGivenMail } from "@/mail/templates-review";
+import { mayReadRemarks } from "./remark-rules";
 import { VERDICT_LABEL, type Stage, type Verdict } from "./stages";
 
 /**
@@ -70,11 +71,12 @@ export async function notifyMove(proposalId: string, from: Stage, to: Stage, rev
   }
 }
 
+/** Only people who may read the proposal hear of a mention: the mail carries the remark's text. */
 export async function notifyMentions(proposalId: string, handles: string[], writer: { id: string; name: string }, body: string): Promise<void> {
   if (handles.length === 0) return;
   const p = await proposalInfo(proposalId);
-  const all = await db.select({ email: users.email, active: users.active, id: users.id }).from(users).where(eq(users.active, true));
-  const targets = all.filter((u) => handles.includes(u.email.split("@")[0].toLowerCase()) && u.id !== writer.id);
+  const all = await db.select({ email: users.email, roles: users.roles, id: users.id }).from(users).where(eq(users.active, true));
+  const targets = all.filter((u) => handles.includes(u.email.split("@")[0].toLowerCase()) && u.id !== writer.id && mayReadRemarks(u));
   const excerpt = body.length > 400 ? `${body.slice(0, 400)}…` : body;
   await deliver(targets.map((u) => mentionMail(u.email, { title: p?.title ?? "a proposal", writer: writer.name, excerpt, link: link(proposalId) })));
 }

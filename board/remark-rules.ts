@@ -1,5 +1,7 @@
+import { BOARD_ROLES } from "@/lib/auth/navigation";
 import type { Role } from "@/lib/auth/roles";
 import { z } from "zod";
+import { CLOSED_STAGES, type Stage } from "./stages";
 
 /**
  * Remarks: who may write, flag, address, resolve and edit. Pure, so the server and the UI share it; the server decides.
@@ -42,6 +44,21 @@ export interface RemarkContext {
 
 const isCurator = (p: RemarkParty, c: RemarkContext) => p.roles.includes("curator") && c.familyCuratorIds.includes(p.id);
 const isReviewer = (p: RemarkParty, c: RemarkContext) => c.assignedReviewerIds.includes(p.id) && p.id !== c.authorId;
+
+/**
+ * Whoever may open the proposal reads its discussion: every review role, as on the board and the review workspace.
+ * The same rule decides who hears of an @mention, so a mail never carries a remark to someone who may not read it.
+ */
+export const REMARK_READER_ROLES: readonly Role[] = BOARD_ROLES;
+
+export function mayReadRemarks(p: { roles: readonly Role[] }): boolean {
+  return p.roles.some((r) => REMARK_READER_ROLES.includes(r));
+}
+
+/** The discussion closes with the proposal: once it is released, declined or withdrawn, remarks are read-only. */
+export function isDiscussionOpen(stage: Stage): boolean {
+  return !CLOSED_STAGES.includes(stage);
+}
 
 /** The author, assigned reviewers and the family's curators take part in the discussion. */
 export function mayWriteRemark(p: RemarkParty, c: RemarkContext): boolean {

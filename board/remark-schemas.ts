@@ -1,8 +1,8 @@
 import { z } from "zod";
+import { withoutNul } from "@/lib/pg-text";
 import { REMARK_MAX, remarkAnchorSchema } from "./remark-rules";
 
-const body = z
-  .string({ error: "Write the remark." })
+const body = withoutNul(z.string({ error: "Write the remark." }))
   .trim()
   .min(1, { error: "Write the remark." })
   .max(REMARK_MAX, { error: `Use at most ${REMARK_MAX.toLocaleString("en")} characters.` });

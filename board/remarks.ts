@@ -7,23 +7,31 @@ import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError } from "@/lib/errors";
 import { notifyMentions } from "./notify";
 import { getAssignedReviewerIds, getFamilyCuratorIds, getLatestRevision } from "./queries";
-import { decideRemarkAction, mayFlagBlocking, mayWriteRemark, mentionedHandles, nextStatus, type RemarkContext } from "./remark-rules";
+import { decideRemarkAction, isDiscussionOpen, mayFlagBlocking, mayWriteRemark, mentionedHandles, nextStatus, type RemarkContext } from "./remark-rules";
 import type { CreateRemarkInput, EditRemarkInput, RemarkActionInput } from "./remark-schemas";
+import type { Stage } from "./stages";
 
-async function contextOf(tx: Tx, proposalId: string): Promise<RemarkContext & { stage: string }> {
-  const [p] = await tx.select({ authorId: proposals.authorId, familyId: proposals.familyId, stage: proposals.stage }).from(proposals).where(eq(proposals.id, proposalId));
+/** Holds the proposal row (shared) until commit, so a move that closes it waits for, or is seen by, this change. */
+async function contextOf(tx: Tx, proposalId: string): Promise<RemarkContext & { stage: Stage }> {
+  const [p] = await tx
+    .select({ authorId: proposals.authorId, familyId: proposals.familyId, stage: proposals.stage })
+    .from(proposals)
+    .where(eq(proposals.id, proposalId))
+    .for("share");
   if (!p) throw new AppError("not-found:proposal", "That proposal does not exist.");
   return { authorId: p.authorId, stage: p.stage, assignedReviewerIds: await getAssignedReviewerIds(tx, proposalId), familyCuratorIds: await getFamilyCuratorIds(tx, p.familyId) };
 }
 
-const CLOSED = ["released", "declined", "withdrawn"];
+function assertDiscussionOpen(stage: Stage): void {
+  if (!isDiscussionOpen(stage)) throw new AppError("refused:closed", "This proposal is closed; its discussion is read-only.");
+}
 
 /** A remark on the latest revision; a reply joins its thread (same anchor, never blocking on its own). */
 export async function createRemark(actor: SessionUser, input: CreateRemarkInput): Promise<{ remarkId: string }> {
   const result = await db.transaction(async (tx) => {
     const ctx = await contextOf(tx, input.proposalId);
     if (!mayWriteRemark(actor, ctx)) throw new AppError("forbidden:remark", "Only the author, assigned reviewers and the family's curators write remarks here.");
-    if (CLOSED.includes(ctx.stage)) throw new AppError("refused:closed", "This proposal is closed; its discussion is read-only.");
+    assertDiscussionOpen(ctx.stage);
     let anchor = input.anchor;
     if (input.parentId) {
       const [parent] = await tx.select({ proposalId: remarks.proposalId, anchor: remarks.anchor, parentId: remarks.parentId }).from(remarks).where(eq(remarks.id, input.parentId));
@@ -66,6 +74,7 @@ export async function actOnRemark(actor: SessionUser, input: RemarkActionInput):
     const ctx = await contextOf(tx, remark.proposalId);
     const refusal = decideRemarkAction(actor, ctx, { writerId: remark.authorId, status: remark.status }, input.action);
     if (refusal) throw new AppError("forbidden:remark", refusal);
+    assertDiscussionOpen(ctx.stage);
     const status = nextStatus(input.action);
     await tx.update(remarks).set({ status, version: remark.version + 1, updatedAt: new Date() }).where(eq(remarks.id, remark.id));
     await recordAudit(tx, { actorId: actor.id, action: `remark.${input.action}`, subjectType: "proposal", subjectId: remark.proposalId, before: { remarkId: remark.id, status: remark.status }, after: { status } });
@@ -78,6 +87,7 @@ export async function editRemark(actor: SessionUser, input: EditRemarkInput): Pr
   await db.transaction(async (tx) => {
     const remark = await lockRemark(tx, input.remarkId, input.version);
     if (remark.authorId !== actor.id) throw new AppError("forbidden:remark", "Only the writer edits a remark.");
+    assertDiscussionOpen((await contextOf(tx, remark.proposalId)).stage);
     await tx.update(remarks).set({ body: input.body, version: remark.version + 1, updatedAt: new Date() }).where(eq(remarks.id, remark.id));
     await recordAudit(tx, { actorId: actor.id, action: "remark.edited", subjectType: "proposal", subjectId: remark.proposalId, before: { remarkId: remark.id, body: remark.body }, after: { body: input.body } });
   });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { withoutNul } from "@/lib/pg-text";
 import { STAGES, VERDICTS } from "./stages";
 
 /** Inputs of the board's use-cases, shared by server actions, route handlers and forms. */
@@ -62,7 +63,7 @@ export const verdictInput = z.object({
 });
 export type VerdictInput = z.infer<typeof verdictInput>;
 
-const listParam = z.preprocess((v) => (typeof v === "string" ? v.split(",").filter(Boolean) : v), z.array(z.string()).default([]));
+const listParam = z.preprocess((v) => (typeof v === "string" ? v.split(",").filter(Boolean) : v), z.array(withoutNul(z.string().max(200))).default([]));
 
 export const boardFilters = z.object({
   family: listParam,

@@ -2,6 +2,7 @@ import "server-only";
 import { unstable_rethrow } from "next/navigation";
 import type { z } from "zod";
 import { AppError, fieldErrorsOf, type ErrorCode } from "./errors";
+import { hasNul, NUL_MESSAGE } from "./pg-text";
 
 export { fieldErrorsOf };
 import { requireRole, requireUser } from "./auth/guard";
@@ -25,6 +26,16 @@ export function formDataToObject(form: FormData): Record<string, unknown> {
   return out;
 }
 
+/** Form fields (and uploaded files' names) that hold NUL, which PostgreSQL cannot store. */
+function nulFieldErrors(form: FormData): Record<string, string[]> | null {
+  const out: Record<string, string[]> = {};
+  for (const [key, value] of form.entries()) {
+    if (key.startsWith("$ACTION")) continue;
+    if (hasNul(typeof value === "string" ? value : value.name)) out[key] = [typeof value === "string" ? NUL_MESSAGE : `The file name: ${NUL_MESSAGE}`];
+  }
+  return Object.keys(out).length > 0 ? out : null;
+}
+
 /**
  * Every server action goes through here: session → zod parse → service → discriminated result.
  * Actions are public POST endpoints, so the access check is never optional.
@@ -40,6 +51,8 @@ export function defineAction<S extends z.ZodType, T>(options: {
     try {
       const user =
         options.access === "public" ? null : options.access === "signed-in" ? await requireUser() : await requireRole(...options.access.roles);
+      const nul = nulFieldErrors(form);
+      if (nul) return { ok: false, code: "invalid:input", error: "Some fields need attention.", fieldErrors: nul };
       const parsed = options.schema.safeParse(formDataToObject(form));
       if (!parsed.success) {
         return { ok: false, code: "invalid:input", error: "Some fields need attention.", fieldErrors: fieldErrorsOf(parsed.error) };

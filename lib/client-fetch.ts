@@ -23,11 +23,15 @@ async function toApiError(res: Response): Promise<ApiError> {
   }
 }
 
-/** The one fetcher for SWR and for mutations: JSON in, JSON out, coded errors thrown as ApiError. */
+/**
+ * The one fetcher for SWR and for mutations: JSON in, JSON out, coded errors thrown as ApiError. Every request but a
+ * GET says it is JSON (the server refuses other content types on state-changing requests).
+ */
 export async function fetchJson<T>(url: string, init?: { method?: string; body?: unknown }): Promise<T> {
+  const method = init?.method ?? "GET";
   const res = await fetch(url, {
-    method: init?.method ?? "GET",
-    headers: init?.body === undefined ? undefined : { "content-type": "application/json" },
+    method,
+    headers: method === "GET" ? undefined : { "content-type": "application/json" },
     body: init?.body === undefined ? undefined : JSON.stringify(init.body),
   });
   if (!res.ok) throw await toApiError(res);

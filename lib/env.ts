@@ -4,6 +4,7 @@ const envSchema = z.object({
   DATABASE_URL: z.string().url().default("postgres://postgres@127.0.0.1:54329/bandgate"),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   APP_URL: z.string().url().default("http://localhost:3000"),
+  NEXTAUTH_URL: z.string().url().optional(),
   SMTP_HOST: z.string().min(1).default("127.0.0.1"),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   SMTP_SECURE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),

@@ -1,14 +1,21 @@
 import "server-only";
 import { z } from "zod";
+import { serverEnv } from "./env";
 import { AppError, fieldErrorsOf, toErrorResponse } from "./errors";
+import { findNul, NUL_MESSAGE } from "./pg-text";
+import { assertSameOriginJson, originsOf } from "./request-guard";
 
-/** The JSON body, unvalidated (for services that validate it themselves); bad JSON is a 400. */
+/** The JSON body, unvalidated (for services that validate it themselves); bad JSON or a NUL in any text is a 400. */
 export async function readJsonBody(request: Request): Promise<unknown> {
+  let body: unknown;
   try {
-    return await request.json();
+    body = await request.json();
   } catch {
     throw new AppError("invalid:json", "The request body is not valid JSON.");
   }
+  const nulAt = findNul(body);
+  if (nulAt !== null) throw new AppError("invalid:input", NUL_MESSAGE, { [nulAt]: [NUL_MESSAGE] });
+  return body;
 }
 
 /** Parse a JSON request body with zod; bad JSON or a bad shape is a 400 with field errors. */
@@ -19,11 +26,18 @@ export async function parseJsonBody<S extends z.ZodType>(request: Request, schem
   return parsed.data;
 }
 
-/** Wrap a route handler so every thrown error becomes the coded JSON error response. */
-export function handleRoute<A extends unknown[]>(fn: (...args: A) => Promise<Response>) {
-  return async (...args: A): Promise<Response> => {
+let appOrigins: string[] | undefined;
+
+/**
+ * Wrap a route handler: a state-changing request must come from the app's own origin with a JSON body (403/415
+ * before the handler runs), and every thrown error becomes the coded JSON error response.
+ */
+export function handleRoute<R extends unknown[]>(fn: (request: Request, ...rest: R) => Promise<Response>) {
+  return async (request: Request, ...rest: R): Promise<Response> => {
     try {
-      return await fn(...args);
+      appOrigins ??= originsOf([serverEnv().APP_URL, serverEnv().NEXTAUTH_URL]);
+      assertSameOriginJson(request, appOrigins);
+      return await fn(request, ...rest);
     } catch (err) {
       const { body, status } = toErrorResponse(err);
       return Response.json(body, { status });

@@ -12,6 +12,16 @@ export function isJsonUpload(fileName: string, text: string): boolean {
   return /\.json$/i.test(fileName.trim()) || text.trimStart().startsWith("{");
 }
 
+/** The stored text must not hold U+0000 (PostgreSQL cannot keep it), not even in a comment. */
+function refuseNul(text: string): void {
+  const at = text.indexOf("\u0000");
+  if (at < 0) return;
+  const before = text.slice(0, at);
+  const line = before.split("\n").length;
+  const column = at - before.lastIndexOf("\n");
+  fail({ line, column, message: `line ${line}, column ${column}: the file holds a NUL character (U+0000); save it as plain UTF-8 text` });
+}
+
 /** Reads an uploaded reference-bands file (CSV or JSON form); energies come back in eV. */
 export function parseReferenceBands(fileName: string, text: string): ParsedReferenceBands {
   // cheap bound first: a UTF-16 code unit never takes more than 3 UTF-8 bytes
@@ -22,6 +32,7 @@ export function parseReferenceBands(fileName: string, text: string): ParsedRefer
     }
   }
   const body = text.startsWith("\uFEFF") ? text.slice(1) : text;
+  refuseNul(body);
   return isJsonUpload(fileName, body) ? parseReferenceJson(body) : parseReferenceCsv(body);
 }
 

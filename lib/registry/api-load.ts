@@ -2,24 +2,35 @@ import "server-only";
 import { z } from "zod";
 import { db } from "@/db/client";
 import { AppError } from "@/lib/errors";
+import { NUL_MESSAGE, withoutNul } from "@/lib/pg-text";
 import { parseModelDocument, type ModelDocument } from "@/lib/tb/document";
 import { getFamilyIdentity, getReleaseById, getReleaseDocument, getReleaseMeta } from "./queries";
 import { rateHeaders, type RateDecision } from "./rate-limit";
 import { releaseStatus } from "./status";
 
-/** Loading steps shared by the v1 route handlers; anything unknown is a 404 with a JSON error. */
-const familyParams = z.object({ slug: z.string().min(1).max(200) });
+/** Loading steps shared by the v1 route handlers; anything unknown is a 404 with a JSON error, a NUL a 400. */
+const familyParams = z.object({ slug: withoutNul(z.string().min(1).max(200)) });
 const releaseParams = familyParams.extend({ version: z.string().regex(/^(latest|\d{1,6}\.\d{1,6}\.\d{1,6})$/) });
+
+function refuseNulParam(error: z.ZodError): void {
+  if (error.issues.some((i) => i.message === NUL_MESSAGE)) throw new AppError("invalid:slug", `The family in the address is not usable: ${NUL_MESSAGE}`);
+}
 
 export function parseFamilyParams(raw: unknown): { slug: string } {
   const parsed = familyParams.safeParse(raw);
-  if (!parsed.success) throw new AppError("not-found:family", "Unknown model family.");
+  if (!parsed.success) {
+    refuseNulParam(parsed.error);
+    throw new AppError("not-found:family", "Unknown model family.");
+  }
   return parsed.data;
 }
 
 export function parseReleaseParams(raw: unknown): { slug: string; version: string } {
   const parsed = releaseParams.safeParse(raw);
-  if (!parsed.success) throw new AppError("not-found:release", "Unknown release version (use MAJOR.MINOR.PATCH or latest).");
+  if (!parsed.success) {
+    refuseNulParam(parsed.error);
+    throw new AppError("not-found:release", "Unknown release version (use MAJOR.MINOR.PATCH or latest).");
+  }
   return parsed.data;
 }
 

@@ -48,6 +48,12 @@ export function bandsCsv(bands: ReleaseBands): string {
 }
 
 /**
+ * Fractional coordinates beyond this size say nothing a smaller equivalent point would not (bands are periodic in k),
+ * and at 1e308 the phases overflow to non-finite values.
+ */
+export const K_FRACTIONAL_LIMIT = 1000;
+
+/**
  * k-points from a query string: "k1,k2,k3;k1,k2,k3" with `dimension` numbers each. Returns a message when malformed.
  */
 export function parseKPointList(text: string, dimension: number, max = 2000): number[][] | string {
@@ -57,7 +63,9 @@ export function parseKPointList(text: string, dimension: number, max = 2000): nu
   const out: number[][] = [];
   for (const [i, p] of points.entries()) {
     const k = p.split(",").map((x) => (x.trim() === "" ? NaN : Number(x)));
-    if (k.length !== dimension || !k.every(Number.isFinite)) return `k-point ${i + 1} must hold ${dimension} finite numbers (the lattice dimension).`;
+    if (k.length !== dimension || !k.every((x) => Number.isFinite(x) && Math.abs(x) <= K_FRACTIONAL_LIMIT)) {
+      return `k-point ${i + 1} must hold ${dimension} finite numbers (the lattice dimension), each between −${K_FRACTIONAL_LIMIT} and ${K_FRACTIONAL_LIMIT} (fractional coordinates).`;
+    }
     out.push(k);
   }
   return out;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { withoutNul } from "@/lib/pg-text";
 
 /** Inputs of the registry's use-cases, shared by server actions and forms. */
 const reason = (what: string) => z.string({ error: `Write why ${what}.` }).trim().min(10, { error: "Write why (at least 10 characters)." }).max(2000, { error: "Use at most 2,000 characters." });
@@ -23,7 +24,7 @@ export type DeprecateInput = Omit<z.infer<typeof deprecateInput>, "successorVers
 export const withdrawInput = z.object({ ...releaseRef, reason: reason("it is withdrawn") });
 export type WithdrawInput = z.infer<typeof withdrawInput>;
 
-export const tokenInput = z.object({ name: z.string({ error: "Name the token." }).trim().min(2, { error: "Use at least 2 characters." }).max(80, { error: "Use at most 80 characters." }) });
+export const tokenInput = z.object({ name: withoutNul(z.string({ error: "Name the token." })).trim().min(2, { error: "Use at least 2 characters." }).max(80, { error: "Use at most 80 characters." }) });
 export const revokeTokenInput = z.object({ tokenId: z.uuid({ error: "Unknown token." }) });
 
 export const webhookInput = z.object({

@@ -3,6 +3,9 @@ import { createHash, randomBytes, timingSafeEqual } from "node:crypto";
 /** API tokens: "bgt_" + 32 random bytes (base64url). Only the sha256 is stored; the token is shown once. */
 const TOKEN_PATTERN = /^bgt_[A-Za-z0-9_-]{43}$/;
 
+/** Active (unrevoked) tokens one person may hold: each token has its own rate limit, so more tokens mean more load. */
+export const API_TOKEN_LIMIT = 10;
+
 export const TOKEN_SCOPES = ["read"] as const;
 export type TokenScope = (typeof TOKEN_SCOPES)[number];
 

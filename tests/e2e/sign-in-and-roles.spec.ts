@@ -38,7 +38,9 @@ test("a reviewer is refused the admin page and the admin action called directly"
   await signIn.signIn(E2E_PEOPLE.reviewer.email, E2E_PASSWORD);
   await expect(page.getByRole("heading", { name: "Not for your role" })).toBeVisible();
 
+  // Sent as the page would send it (same origin, JSON), so only the role decides.
   const response = await page.request.post("/api/admin/invitations", {
+    headers: { origin: new URL(page.url()).origin },
     data: { email: "smuggled@test.invalid", name: "Smuggled", roles: ["admin"] },
   });
   expect(response.status()).toBe(403);

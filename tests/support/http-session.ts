@@ -16,9 +16,13 @@ export class HttpSession {
     return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
   }
 
+  /** Like a browser: unsafe methods carry this page's Origin unless the caller sets (or removes) it. */
   async fetch(path: string, init: RequestInit = {}): Promise<Response> {
     const headers = new Headers(init.headers);
     if (this.cookies.size) headers.set("cookie", this.cookieHeader);
+    const unsafe = !["GET", "HEAD", "OPTIONS"].includes((init.method ?? "GET").toUpperCase());
+    if (unsafe && !headers.has("origin")) headers.set("origin", new URL(this.base).origin);
+    if (headers.get("origin") === "") headers.delete("origin");
     const res = await fetch(this.base + path, { ...init, headers, redirect: "manual" });
     this.remember(res);
     return res;
@@ -39,8 +43,8 @@ export class HttpSession {
     return new URL(target, this.base).searchParams.get("error");
   }
 
-  json(path: string, method: string, body: unknown): Promise<Response> {
-    return this.fetch(path, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+  json(path: string, method: string, body: unknown, headers: Record<string, string> = {}): Promise<Response> {
+    return this.fetch(path, { method, headers: { "content-type": "application/json", ...headers }, body: JSON.stringify(body) });
   }
 }
 

@@ -13,7 +13,9 @@ export const dynamic = "force-dynamic";
 export default async function BoardPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser("/board", [...BOARD_ROLES]);
   const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, Array.isArray(v) ? v.join(",") : v]));
-  const filters = boardFilters.parse(raw);
+  // Unusable filters in the address (the proxy already answers a NUL with 400) show the whole board.
+  const parsed = boardFilters.safeParse(raw);
+  const filters = parsed.success ? parsed.data : boardFilters.parse({});
   const [cards, families] = await Promise.all([listBoardCards(filters, user.id), listFamiliesWithCurators()]);
   return (
     <>

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { anchorFromQuery, decideRemarkAction, mayFlagBlocking, mayWriteRemark, mentionedHandles, nextStatus, type RemarkContext, type RemarkStatus } from "@/board/remark-rules";
+import { anchorFromQuery, decideRemarkAction, isDiscussionOpen, mayFlagBlocking, mayReadRemarks, mayWriteRemark, mentionedHandles, nextStatus, type RemarkContext, type RemarkStatus } from "@/board/remark-rules";
+import { STAGES } from "@/board/stages";
 
 const ctx: RemarkContext = { authorId: "author", assignedReviewerIds: ["rev", "author"], familyCuratorIds: ["cur"] };
 const author = { id: "author", roles: ["author", "reviewer"] as const };
@@ -19,6 +20,20 @@ describe("who takes part in remarks", () => {
     expect(mayFlagBlocking(curator, ctx)).toBe(true);
     expect(mayFlagBlocking(author, ctx)).toBe(false);
     expect(mayFlagBlocking(stranger, ctx)).toBe(false);
+  });
+});
+
+describe("who reads remarks (and so may hear of a mention)", () => {
+  it("every review role reads, as on the review workspace; a consumer or a person without roles does not", () => {
+    for (const role of ["author", "reviewer", "curator", "admin"] as const) expect(mayReadRemarks({ roles: [role] })).toBe(true);
+    expect(mayReadRemarks({ roles: ["consumer"] })).toBe(false);
+    expect(mayReadRemarks({ roles: [] })).toBe(false);
+  });
+});
+
+describe("the discussion closes with the proposal", () => {
+  it("is open in every stage but released, declined and withdrawn", () => {
+    expect(STAGES.filter((s) => !isDiscussionOpen(s))).toEqual(["released", "declined", "withdrawn"]);
   });
 });
 

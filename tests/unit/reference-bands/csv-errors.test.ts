@@ -20,6 +20,12 @@ describe("CSV errors name line and column", () => {
     expect(issuesOf(text)).toEqual([{ line: 14, column: 3, message: "line 14, column 3 (E2 (eV)): 'abc' is not a number" }]);
   });
 
+  it("a NUL character anywhere, even in a comment, with its line and column", () => {
+    const text = lines("# written by hand \u0000", "k_index,E1 (eV)", "0,1.0");
+    expect(issuesOf(text)).toEqual([{ line: 1, column: 19, message: "line 1, column 19: the file holds a NUL character (U+0000); save it as plain UTF-8 text" }]);
+    expect(issuesOf(lines("k_index,E1 (eV)", "0,1.\u00000"))[0]).toMatchObject({ line: 2, column: 5 });
+  });
+
   it.each([
     ["NaN", "'NaN' is not allowed: values must be finite numbers (no NaN or Infinity)"],
     ["Infinity", "'Infinity' is not allowed: values must be finite numbers (no NaN or Infinity)"],

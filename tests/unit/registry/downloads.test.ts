@@ -31,6 +31,8 @@ describe("bands for downstream codes", () => {
     expect(parseKPointList("0,x,0", 3)).toMatch(/finite numbers/);
     expect(parseKPointList("", 1)).toMatch(/at least one/);
     expect(parseKPointList("0;0;0", 1, 2)).toMatch(/At most 2/);
+    for (const huge of ["1e308", "-1e308", "1e20", "0;1000.5", "Infinity"]) expect(parseKPointList(huge, 1)).toMatch(/between −1000 and 1000/);
+    expect(parseKPointList("1000,-1000", 2)).toEqual([[1000, -1000]]);
   });
 });
 

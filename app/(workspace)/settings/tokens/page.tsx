@@ -3,6 +3,7 @@ import Link from "next/link";
 import { PageTitle } from "@/app/_components/page-title";
 import { requirePageUser } from "@/lib/auth/guard";
 import { listApiTokens } from "@/lib/registry/token-service";
+import { API_TOKEN_LIMIT } from "@/lib/registry/tokens";
 import { CreateTokenForm } from "./create-token-form";
 import { RevokeTokenButton } from "./revoke-token-button";
 
@@ -21,7 +22,8 @@ export default async function TokensPage() {
         lead={
           <>
             Read-only tokens for pulling releases over the registry API (<a href="/api/v1/openapi.json" className="underline">OpenAPI description</a>). A
-            token is shown once, stored only as a hash, and can be revoked at any time. Webhooks and e-mail are under{" "}
+            token is shown once, stored only as a hash, and can be revoked at any time; you may hold {API_TOKEN_LIMIT} active tokens at
+            once ({tokens.filter((t) => !t.revokedAt).length} now). Webhooks and e-mail are under{" "}
             <Link href="/settings/notifications" className="underline">Notifications</Link>.
           </>
         }

@@ -40,7 +40,7 @@ export function BandPanel({
   onSettingsChange,
 }: {
   data: BandViewData;
-  remarkBase: string;
+  remarkBase: string | null;
   initialWindow: [number, number] | null;
   /** Default: the valence-band maximum when the proposed revision has one, else none. */
   initialAlignment?: Alignment;

@@ -13,7 +13,7 @@ interface Path {
 }
 
 /** Keyboard way to zoom: a leg of the path or typed k and energy ranges; reset; a remark link for the k-range. */
-export function BandZoomControls({ path, kRange, eRange, remarkBase, onZoom }: { path: Path; kRange: Range | null; eRange: Range | null; remarkBase: string; onZoom: (k: Range | null, e: Range | null) => void }) {
+export function BandZoomControls({ path, kRange, eRange, remarkBase, onZoom }: { path: Path; kRange: Range | null; eRange: Range | null; remarkBase: string | null; onZoom: (k: Range | null, e: Range | null) => void }) {
   const fmt = (r: Range | null, i: 0 | 1) => (r ? r[i].toFixed(3) : "");
   const [text, setText] = useState({ k0: fmt(kRange, 0), k1: fmt(kRange, 1), e0: fmt(eRange, 0), e1: fmt(eRange, 1) });
   const [shown, setShown] = useState({ kRange, eRange });
@@ -76,7 +76,7 @@ export function BandZoomControls({ path, kRange, eRange, remarkBase, onZoom }: {
       <button type="button" className={BUTTON} onClick={() => onZoom(null, null)} disabled={!kRange && !eRange}>
         Reset zoom
       </button>
-      {kRange ? (
+      {kRange && remarkBase ? (
         <a className="text-copper-deep underline" href={remarkRangeHref(remarkBase, path, kRange)}>
           Remark on this k-range ({rangeEndLabel(path, kRange[0])} to {rangeEndLabel(path, kRange[1])})
         </a>

@@ -23,7 +23,7 @@ const ALIGNMENT_TEXT: Record<Alignment, string> = {
 export function BandsWithMetrics({ proposalId, data, remarkBase, slug, initial, initialRows }: {
   proposalId: string;
   data: BandViewData;
-  remarkBase: string;
+  remarkBase: string | null;
   slug: string;
   initial: Settings;
   initialRows: MetricsRow[];

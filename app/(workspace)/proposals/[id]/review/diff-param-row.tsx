@@ -34,8 +34,8 @@ function EffectCell({ row }: { row: ParamDiffRow }) {
   );
 }
 
-/** One changed parameter: values, Δ, %Δ and its effect, with a link that anchors a remark to it. */
-export function ParamDiffRowView({ row, remarkHref }: { row: ParamDiffRow; remarkHref: string }) {
+/** One changed parameter: values, Δ, %Δ and its effect, with a link that anchors a remark to it (for those who may write one). */
+export function ParamDiffRowView({ row, remarkHref }: { row: ParamDiffRow; remarkHref: string | null }) {
   return (
     <tr id={`param-${row.key}`} className="scroll-mt-20 target:outline target:outline-2 target:outline-copper">
       <td className="px-3 py-1.5 align-top">
@@ -47,9 +47,11 @@ export function ParamDiffRowView({ row, remarkHref }: { row: ParamDiffRow; remar
         ) : null}
         <div className="flex flex-wrap items-baseline gap-x-3 text-xs text-ink-soft">
           <span className="num break-all">{row.key}</span>
-          <a href={remarkHref} className="text-copper-deep underline">
-            Remark on this
-          </a>
+          {remarkHref ? (
+            <a href={remarkHref} className="text-copper-deep underline">
+              Remark on this
+            </a>
+          ) : null}
         </div>
       </td>
       {row.base === null ? <Missing word="added" /> : <td className={cell}>{formatFixed(row.base, 4)}</td>}

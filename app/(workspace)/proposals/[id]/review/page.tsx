@@ -5,7 +5,7 @@ import { Markdown } from "@/app/_components/markdown";
 import { SafetyNote } from "@/app/_components/safety-note";
 import { getProposalView } from "@/board/proposal-view";
 import { getRevisionDocument, listRemarks } from "@/board/queries";
-import { anchorFromQuery, mayFlagBlocking, mayWriteRemark } from "@/board/remark-rules";
+import { anchorFromQuery, isDiscussionOpen, mayFlagBlocking, mayWriteRemark } from "@/board/remark-rules";
 import { acceptanceBlockers } from "@/board/rules";
 import { requirePageUser } from "@/lib/auth/guard";
 import { BOARD_ROLES } from "@/lib/auth/navigation";
@@ -63,6 +63,10 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const remarks = await listRemarks(id);
   const toRevision = view.revisions.find((r) => `r${r.number}` === to.value) ?? null;
   const ctx = { authorId: proposal.authorId, assignedReviewerIds: view.facts.assignedReviewerIds, familyCuratorIds: view.facts.familyCuratorIds };
+  const discussionOpen = isDiscussionOpen(proposal.stage);
+  const mayWrite = discussionOpen && mayWriteRemark(user, ctx);
+  // "Remark on this" links only for those who may write one now.
+  const remarkBase = mayWrite ? base : null;
   const options = [
     ...(baseDocument ? [{ value: "base", label: `base release ${view.baseVersion}` }] : []),
     ...view.revisions.map((r) => ({ value: `r${r.number}`, label: `revision ${r.number}${r.note ? ` — ${r.note}` : ""}` })),
@@ -84,7 +88,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
           ) : null}
           <Section title="What changed">
             <RevisionPairPicker options={options} from={from.value} to={to.value} />
-            {diff ? <ParameterDiffPanel diff={diff} remarkBase={base} /> : <p className="text-sm text-ink-soft">That revision is not a valid document.</p>}
+            {diff ? <ParameterDiffPanel diff={diff} remarkBase={remarkBase} /> : <p className="text-sm text-ink-soft">That revision is not a valid document.</p>}
             <details className="mt-4">
               <summary className="cursor-pointer text-sm font-semibold">Canonical document, line by line</summary>
               <div className="mt-2">
@@ -101,7 +105,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
             <FitOriginSection proposalId={id} revisionId={toRevision.id} revisionNumber={toRevision.number} document={to.doc} />
           ) : null}
           <Section title="What it does to the bands">
-            <BandsWithMetrics proposalId={id} data={bandView} remarkBase={base} slug={proposalSlug(proposal.title)} initial={metricsSettings} initialRows={metrics} />
+            <BandsWithMetrics proposalId={id} data={bandView} remarkBase={remarkBase} slug={proposalSlug(proposal.title)} initial={metricsSettings} initialRows={metrics} />
           </Section>
           <Section title={`Checks and gate (revision ${latest.number})`}>
             <ChecksGatePanel checks={latest.checkResults} criteria={view.criteria} waivedReason={latest.checksWaivedReason} gateReasons={acceptanceBlockers(view.facts)} />
@@ -123,7 +127,8 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
                 viewer={user}
                 ctx={ctx}
                 latestRevision={latest.number}
-                mayWrite={mayWriteRemark(user, ctx)}
+                open={discussionOpen}
+                mayWrite={mayWrite}
                 mayBlock={mayFlagBlocking(user, ctx)}
                 anchorForNew={anchorFromQuery(search.remark)}
                 clearAnchorHref={`${base}#remarks`}

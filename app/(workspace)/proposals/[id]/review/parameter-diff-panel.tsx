@@ -23,7 +23,7 @@ function remarkHrefFor(remarkBase: string, key: string): string {
 }
 
 /** The keyed parameter diff: structure changes, the gauge verdict, and the table of changed parameters. */
-export function ParameterDiffPanel({ diff, remarkBase }: { diff: ParameterDiff; remarkBase: string }) {
+export function ParameterDiffPanel({ diff, remarkBase }: { diff: ParameterDiff; remarkBase: string | null }) {
   const [sort, setSort] = useState<ParamSortKey>("effect");
   const groups = groupParamRows(diff.rows, sort);
   const windowText = diff.window ? `[${formatFixed(diff.window[0], 2)}, ${formatFixed(diff.window[1], 2)}] eV` : "every band";
@@ -82,7 +82,7 @@ export function ParameterDiffPanel({ diff, remarkBase }: { diff: ParameterDiff; 
                   </th>
                 </tr>
                 {g.rows.map((row) => (
-                  <ParamDiffRowView key={row.key} row={row} remarkHref={remarkHrefFor(remarkBase, row.key)} />
+                  <ParamDiffRowView key={row.key} row={row} remarkHref={remarkBase === null ? null : remarkHrefFor(remarkBase, row.key)} />
                 ))}
               </tbody>
             ))}
