@@ -14,7 +14,7 @@ ensure_chromium
 ensure_postgres_binaries
 pg_up "$PWD/.data/pg-test" "$TEST_PG_PORT"
 recreate_database "$TEST_PG_PORT" bandgate_test
-export DATABASE_URL="postgres://postgres@127.0.0.1:$TEST_PG_PORT/bandgate_test"
+ensure_roles "$TEST_PG_PORT" bandgate_test   # the app, the worker and the tests connect as the app role
 export NEXTAUTH_SECRET="test-secret-not-for-production-use-0123456789"
 export E2E_PORT="${E2E_PORT:-3100}"
 export NEXTAUTH_URL="http://127.0.0.1:$E2E_PORT" APP_URL="http://127.0.0.1:$E2E_PORT"

@@ -1,7 +1,13 @@
 import type PgBoss from "pg-boss";
 import { jobSettings } from "./settings";
 
-/** Queue names; every process creates them on start (pg-boss 10 needs a queue before its first job). */
+/** The queue's own schema, created and upgraded by the migration step as the owner role. */
+export const JOB_SCHEMA = "pgboss";
+
+/**
+ * Queue names. pg-boss 10 needs a queue (a table of its own) before its first job: the migration step creates them as
+ * the owner role; every process checks for them on start, which changes nothing once they exist.
+ */
 export const QUEUES = {
   releaseEvent: "release-event",
   webhookDelivery: "webhook-delivery",

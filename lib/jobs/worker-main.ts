@@ -7,7 +7,7 @@ import { serverEnv } from "@/lib/env";
 import { deliverWebhook } from "./deliver-webhook";
 import { fanOutReleaseEvent } from "./fan-out";
 import { failFit } from "@/lib/fits/worker-side";
-import { ensureQueues, QUEUES, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
+import { ensureQueues, JOB_SCHEMA, QUEUES, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
 import { runFitJob } from "./run-fit";
 import { giveBackStalledFits } from "./stalled-fits";
 import { requeueUnsentReleaseEvents } from "./unsent-release-events";
@@ -20,7 +20,8 @@ import { jobSettings } from "./settings";
  * to one of them. Each process runs up to FIT_CONCURRENCY refits at once, each in its own thread.
  * Start: node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
  */
-const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, max: 4 });
+// The queue's schema is installed and upgraded by the migration step (as the owner role), never by a worker.
+const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, schema: JOB_SCHEMA, migrate: false, max: 4 });
 boss.on("error", (err) => console.error("[bandgate worker]", err.message));
 await boss.start();
 await ensureQueues(boss);
