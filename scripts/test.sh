@@ -28,9 +28,11 @@ build_if_needed
 # Deliveries retry after about 1–2 s here (15 s and doubling in production), so the retry test stays short.
 export WEBHOOK_RETRY_DELAY_SECONDS=1
 export WEBHOOK_ALLOW_PRIVATE=true   # test receivers listen on 127.0.0.1
-start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
 
 status=0
+# The fault tests start, kill and stop worker processes of their own, so they run before the shared worker starts.
+log "worker fault tests (SIGKILL and SIGTERM during a refit)"; npx vitest run --project faults || status=1
+start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
 log "lint (eslint)"; npx eslint . || status=1
 log "type check (tsc)"; npx tsc --noEmit -p tsconfig.json || status=1
 log "unit tests"; npx vitest run --project unit || status=1
