@@ -23,6 +23,11 @@ export default defineConfig({
           globalSetup: ["tests/integration/global-setup.ts"],
         },
       },
+      {
+        extends: true,
+        // Worker processes started, killed and stopped by the tests themselves: no other worker may share the database.
+        test: { name: "faults", include: ["tests/faults/**/*.test.ts"], fileParallelism: false, testTimeout: 480_000, hookTimeout: 60_000 },
+      },
     ],
   },
 });

@@ -1,5 +1,5 @@
 import { doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
-import { FIT_STATUSES, type CostPoint, type FitOutcome } from "@/lib/fits/record";
+import { FIT_STATUSES, type CostPoint, type FitInterruption, type FitOutcome, type StoredCheckpoint } from "@/lib/fits/record";
 import type { FitSpec } from "@/lib/fits/spec";
 import { proposals, referenceBandSets, revisions, users } from "./schema";
 
@@ -29,8 +29,14 @@ export const fitRuns = pgTable(
     status: fitStatus("status").notNull().default("queued"),
     spec: jsonb("spec").$type<FitSpec>().notNull(),
     engineVersion: text("engine_version").notNull(),
-    /** Worker attempts so far (a crashed worker's job is retried). */
+    /** Worker attempts so far (a crashed worker's job is retried, a stopped worker's job handed back). */
     attempts: integer("attempts").notNull().default(0),
+    /** Attempts that ended in a crash (the worker died or its thread failed): only these count against the retry limit. */
+    crashes: integer("crashes").notNull().default(0),
+    /** Where the fit stood at the last heartbeat: a handed-back or retried run resumes from here. */
+    checkpoint: jsonb("checkpoint").$type<StoredCheckpoint | null>(),
+    /** Each time a worker stopped or crashed while running it, and the iteration and best cost it resumed from. */
+    interruptions: jsonb("interruptions").$type<FitInterruption[]>().notNull().default([]),
     iteration: integer("iteration").notNull().default(0),
     cost: doublePrecision("cost"),
     elapsedMs: integer("elapsed_ms").notNull().default(0),

@@ -1,7 +1,10 @@
 import { z } from "zod";
 
 const envSchema = z.object({
-  DATABASE_URL: z.string().url().default("postgres://postgres@127.0.0.1:54329/bandgate"),
+  /** The web app and the worker connect as this role: row access only, owns nothing (README: Database roles). */
+  DATABASE_URL: z.string().url().default("postgres://bandgate_app@127.0.0.1:54329/bandgate"),
+  /** The migration step connects as the owner of the tables; DATABASE_URL when unset (one role, no separation). */
+  MIGRATION_DATABASE_URL: z.string().url().optional(),
   NEXTAUTH_SECRET: z.string().min(16).optional(),
   APP_URL: z.string().url().default("http://localhost:3000"),
   NEXTAUTH_URL: z.string().url().optional(),

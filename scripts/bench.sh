@@ -11,7 +11,7 @@ ensure_node_modules
 ensure_postgres_binaries
 pg_up "$PWD/.data/pg-test" 54339
 recreate_database 54339 bandgate_bench
-export DATABASE_URL="postgres://postgres@127.0.0.1:54339/bandgate_bench"
+ensure_roles 54339 bandgate_bench
 node_modules/.bin/tsx db/migrate.ts >/dev/null
 build_if_needed   # the API benchmark serves the built app
 node_modules/.bin/tsx --conditions=react-server bench/index.ts

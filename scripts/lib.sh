@@ -81,6 +81,16 @@ ensure_database() {
   fi
 }
 
+# ensure_roles PORT NAME: the owner and app roles (db/roles.sql), made as the local superuser; sets DATABASE_URL (the
+# app role, for the web app and the worker) and MIGRATION_DATABASE_URL (the owner, for migrations).
+ensure_roles() {
+  local port="$1" name="$2"
+  "$PGBIN/psql" -q -X -h 127.0.0.1 -p "$port" -U postgres -d postgres \
+    -v owner=bandgate_owner -v app=bandgate_app -v db="$name" -f db/roles.sql >/dev/null
+  export DATABASE_URL="postgres://bandgate_app@127.0.0.1:$port/$name"
+  export MIGRATION_DATABASE_URL="postgres://bandgate_owner@127.0.0.1:$port/$name"
+}
+
 recreate_database() {
   local port="$1" name="$2"
   "$PGBIN/dropdb" -h 127.0.0.1 -p "$port" -U postgres --if-exists --force "$name"

@@ -13,7 +13,7 @@ if [ -z "${DATABASE_URL:-}" ]; then
   ensure_postgres_binaries
   pg_up "$PWD/.data/pg" 54329
   ensure_database 54329 bandgate
-  export DATABASE_URL="postgres://postgres@127.0.0.1:54329/bandgate"
+  ensure_roles 54329 bandgate
   # A local demo may send webhooks to receivers on this machine; a deployment with its own database may not.
   export WEBHOOK_ALLOW_PRIVATE="${WEBHOOK_ALLOW_PRIVATE:-true}"
 fi

@@ -14,7 +14,7 @@ ensure_chromium
 ensure_postgres_binaries
 pg_up "$PWD/.data/pg-test" "$TEST_PG_PORT"
 recreate_database "$TEST_PG_PORT" bandgate_test
-export DATABASE_URL="postgres://postgres@127.0.0.1:$TEST_PG_PORT/bandgate_test"
+ensure_roles "$TEST_PG_PORT" bandgate_test   # the app, the worker and the tests connect as the app role
 export NEXTAUTH_SECRET="test-secret-not-for-production-use-0123456789"
 export E2E_PORT="${E2E_PORT:-3100}"
 export NEXTAUTH_URL="http://127.0.0.1:$E2E_PORT" APP_URL="http://127.0.0.1:$E2E_PORT"
@@ -28,9 +28,11 @@ build_if_needed
 # Deliveries retry after about 1–2 s here (15 s and doubling in production), so the retry test stays short.
 export WEBHOOK_RETRY_DELAY_SECONDS=1
 export WEBHOOK_ALLOW_PRIVATE=true   # test receivers listen on 127.0.0.1
-start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
 
 status=0
+# The fault tests start, kill and stop worker processes of their own, so they run before the shared worker starts.
+log "worker fault tests (SIGKILL and SIGTERM during a refit)"; npx vitest run --project faults || status=1
+start_child node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
 log "lint (eslint)"; npx eslint . || status=1
 log "type check (tsc)"; npx tsc --noEmit -p tsconfig.json || status=1
 log "unit tests"; npx vitest run --project unit || status=1

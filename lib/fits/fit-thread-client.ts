@@ -1,3 +1,4 @@
+import type { DocumentFitProgress } from "@/lib/tb/analysis/fit-document";
 import { startModuleWorker } from "@/lib/tb/worker-start";
 import type { FitThreadReply, FitThreadRequest } from "./fit-thread-protocol";
 import type { FitOutcome } from "./record";
@@ -21,7 +22,7 @@ export interface FitThread {
   terminate(): Promise<void>;
 }
 
-export function runFitInThread(request: Extract<FitThreadRequest, { type: "run" }>, onProgress: (p: { iteration: number; cost: number; elapsedMs: number }) => void): FitThread {
+export function runFitInThread(request: Extract<FitThreadRequest, { type: "run" }>, onProgress: (p: DocumentFitProgress) => void): FitThread {
   const thread = startModuleWorker(import.meta.url, "fit-thread");
   const result = new Promise<FitOutcome>((resolve, reject) => {
     thread.on("message", (msg: FitThreadReply) => {

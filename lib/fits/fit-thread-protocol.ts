@@ -1,5 +1,5 @@
 import type { ReferenceBands } from "@/lib/tb/analysis/compare-reference";
-import type { DocumentFitOptions } from "@/lib/tb/analysis/fit-document";
+import type { DocumentFitOptions, DocumentFitProgress } from "@/lib/tb/analysis/fit-document";
 import type { ModelDocument } from "@/lib/tb/document";
 import type { FitOutcome } from "./record";
 
@@ -9,6 +9,6 @@ export type FitThreadRequest =
   | { type: "stop" };
 
 export type FitThreadReply =
-  | { type: "progress"; iteration: number; cost: number; elapsedMs: number }
+  | ({ type: "progress" } & DocumentFitProgress)
   | { type: "done"; outcome: FitOutcome }
   | { type: "error"; message: string; inputError: boolean };

@@ -16,7 +16,7 @@ port.on("message", async (msg: FitThreadRequest) => {
     const result = await fitDocument(msg.doc, msg.keys, msg.reference, {
       ...msg.options,
       signal: controller.signal,
-      onProgress: (p) => reply({ type: "progress", iteration: p.iteration, cost: p.cost, elapsedMs: p.elapsedMs }),
+      onProgress: (p) => reply({ type: "progress", ...p }),
     });
     reply({ type: "done", outcome: outcomeOf(result) });
   } catch (err) {

@@ -1,5 +1,5 @@
 import type { FitResult } from "@/lib/tb/analysis/fit";
-import type { DocumentFitResult, RestartOutcome } from "@/lib/tb/analysis/fit-document";
+import type { DocumentFitResult, FitCheckpoint, RestartOutcome } from "@/lib/tb/analysis/fit-document";
 
 /** Lifecycle of a fit run. queued → running → one of the final states; a crashed worker's run goes back to queued. */
 export const FIT_STATUSES = ["queued", "running", "converged", "not_converged", "cancelled", "failed"] as const;
@@ -15,6 +15,18 @@ export const FIT_STATUS_LABEL: Record<FitStatus, string> = {
   cancelled: "cancelled",
   failed: "failed",
 };
+
+/** A checkpoint as stored with the heartbeat; it is resumed only by the engine version that wrote it. */
+export type StoredCheckpoint = FitCheckpoint & { engineVersion: string };
+
+/** A worker stopped (handed the run back) or crashed while running the fit; the next attempt resumed from here. */
+export interface FitInterruption {
+  at: string;
+  by: "stop" | "crash";
+  /** Iteration and lowest cost of the checkpoint the next attempt starts from (0 and null: from the beginning). */
+  iteration: number;
+  cost: number | null;
+}
 
 /** One point of the cost history: iteration, ½Σw·ΔE² (eV²), elapsed ms. */
 export type CostPoint = [number, number, number];

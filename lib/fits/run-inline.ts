@@ -2,7 +2,8 @@ import "server-only";
 import { fitDocument } from "@/lib/tb/analysis/fit-document";
 import { buildFitProblem } from "./problem";
 import { appendCost, outcomeOf, type CostPoint } from "./record";
-import { claimFit, finishFit, loadRunContext } from "./worker-side";
+import { claimFit } from "./attempt";
+import { finishFit, loadRunContext } from "./worker-side";
 
 /**
  * Runs a recorded fit in this process, start to finish, through the same claim and finish steps as a worker

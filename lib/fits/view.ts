@@ -1,7 +1,7 @@
 import type { FitRunRow } from "./queries";
 import { compareReproduction, type Reproduction } from "./reproduce";
 import { describeFitWeights } from "./result-document";
-import { ACTIVE_FIT_STATUSES, FIT_STATUS_LABEL, type CostPoint, type FitStatus } from "./record";
+import { ACTIVE_FIT_STATUSES, FIT_STATUS_LABEL, type CostPoint, type FitInterruption, type FitStatus } from "./record";
 
 /** A fit run as the pages and the API show it (JSON-safe). */
 export interface FitRunView {
@@ -22,6 +22,12 @@ export interface FitRunView {
   history: CostPoint[];
   elapsedMs: number;
   attempts: number;
+  /** Attempts that ended in a crash (only these count against the retry limit). */
+  crashes: number;
+  /** Each worker stop or crash during the run, and the iteration it resumed from. */
+  interruptions: FitInterruption[];
+  /** The interruptions in a sentence, null when the run went in one go. */
+  resumed: string | null;
   /** Milliseconds since the worker last wrote progress (null before it started). */
   heartbeatAgeMs: number | null;
   cancelRequested: boolean;
@@ -47,6 +53,16 @@ function settingsLine(spec: FitRunRow["run"]["spec"]): string {
   return `${describeFitWeights(spec)}; ${window}; ${starts}`;
 }
 
+/** "Resumed twice from its best point so far: after a crash at iteration 12, after a worker stop at iteration 20." */
+export function describeResumes(interruptions: FitInterruption[]): string | null {
+  if (interruptions.length === 0) return null;
+  const times = interruptions.length === 1 ? "once" : interruptions.length === 2 ? "twice" : `${interruptions.length} times`;
+  const each = interruptions.map(
+    (i) => `after ${i.by === "stop" ? "a worker stop" : "a crash"} ${i.cost === null ? "before its first step (from the start)" : `at iteration ${i.iteration}`}`,
+  );
+  return `Resumed ${times} from its best point so far: ${each.join(", ")}.`;
+}
+
 export function fitRunView(row: FitRunRow, now = Date.now(), original?: FitRunRow["run"] | null): FitRunView {
   const { run } = row;
   return {
@@ -67,6 +83,9 @@ export function fitRunView(row: FitRunRow, now = Date.now(), original?: FitRunRo
     history: run.costHistory,
     elapsedMs: run.elapsedMs,
     attempts: run.attempts,
+    crashes: run.crashes,
+    interruptions: run.interruptions,
+    resumed: describeResumes(run.interruptions),
     heartbeatAgeMs: run.progressAt ? Math.max(0, now - run.progressAt.getTime()) : null,
     cancelRequested: Boolean(run.cancelRequestedAt),
     startRms: run.outcome?.startRms ?? null,

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, inArray, lt, sql } from "drizzle-orm";
+import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@/db/client";
 import { fitRuns, type FitRun } from "@/db/schema";
 import { decideRevise } from "@/board/rules";
@@ -14,43 +14,11 @@ import { notifyFitFinished } from "./notify-finished";
 import { fittedDocument, fittedEnergyRange } from "./result-document";
 import { fitRevisionNote, statusOfOutcome, undeterminedNames, type CostPoint, type FitOutcome } from "./record";
 
-/* The worker's side of a fit run: claim, heartbeat, finish, give back for a retry, fail. No permission checks here:
-   the run was authorised when it was started. */
-
-/** Marks a waiting run as running (one more attempt); null when there is nothing to do (finished or cancelled). */
-export async function claimFit(fitId: string): Promise<FitRun | null> {
-  const [run] = await db
-    .update(fitRuns)
-    .set({ status: "running", attempts: sql`${fitRuns.attempts} + 1`, startedAt: sql`coalesce(${fitRuns.startedAt}, now())`, progressAt: new Date() })
-    .where(and(eq(fitRuns.id, fitId), inArray(fitRuns.status, ["queued", "running"])))
-    .returning();
-  if (!run) return null;
-  if (run.cancelRequestedAt) {
-    await db.update(fitRuns).set({ status: "cancelled", finishedAt: new Date() }).where(eq(fitRuns.id, fitId));
-    return null;
-  }
-  return run;
-}
+/* The worker's side of a fit run, its end: the outcome stored (and saved as a revision when it may be), or failure.
+   No permission checks here: the run was authorised when it was started. Claims and heartbeats: attempt.ts. */
 
 export function loadRunContext(run: FitRun): Promise<FitContext> {
   return loadFitContext(db, run.proposalId, run.referenceSetId, run.baseRevisionId);
-}
-
-export interface ProgressSnapshot {
-  iteration: number;
-  cost: number | null;
-  elapsedMs: number;
-  history: CostPoint[];
-}
-
-/** The heartbeat: progress so far; answers whether someone asked to cancel, or the run is no longer this worker's. */
-export async function writeProgress(fitId: string, p: ProgressSnapshot): Promise<{ cancel: boolean; lost: boolean }> {
-  const [row] = await db
-    .update(fitRuns)
-    .set({ iteration: p.iteration, cost: p.cost, elapsedMs: Math.round(p.elapsedMs), costHistory: p.history, progressAt: new Date() })
-    .where(and(eq(fitRuns.id, fitId), eq(fitRuns.status, "running")))
-    .returning({ cancelRequestedAt: fitRuns.cancelRequestedAt });
-  return { cancel: Boolean(row?.cancelRequestedAt), lost: !row };
 }
 
 const NOT_SAVED: Record<FitOutcome["status"], string> = {
@@ -67,7 +35,7 @@ const NOT_SAVED: Record<FitOutcome["status"], string> = {
 export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcome, history: CostPoint[]): Promise<void> {
   await db.transaction(async (tx) => {
     const [current] = await tx.select().from(fitRuns).where(eq(fitRuns.id, run.id)).for("update");
-    if (!current || current.status !== "running") return;
+    if (!current || current.status !== "running" || current.attempts !== run.attempts) return;
     let applyNote: string | null = NOT_SAVED[outcome.status] || null;
     let resultRevisionId: string | null = null;
     const unpinned = undeterminedNames(outcome);
@@ -119,6 +87,7 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
         finishedAt: new Date(),
         resultRevisionId,
         applyNote,
+        checkpoint: null,
       })
       .where(eq(fitRuns.id, run.id));
     await recordAudit(tx, {
@@ -132,14 +101,6 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
   await notifyFitFinished(run.id);
 }
 
-/** A failed attempt that will be retried: back to waiting, with the reason kept. */
-export async function releaseForRetry(fitId: string, reason: string): Promise<void> {
-  await db
-    .update(fitRuns)
-    .set({ status: "queued", failureReason: reason })
-    .where(and(eq(fitRuns.id, fitId), eq(fitRuns.status, "running")));
-}
-
 export async function failFit(fitId: string, reason: string): Promise<void> {
   await db.transaction(async (tx) => {
     const [run] = await tx
@@ -150,16 +111,4 @@ export async function failFit(fitId: string, reason: string): Promise<void> {
     if (run) await recordAudit(tx, { actorId: null, action: "fit.failed", subjectType: "proposal", subjectId: run.proposalId, after: { fit: fitId, reason } });
   });
   await notifyFitFinished(fitId);
-}
-
-/**
- * Runs whose worker stopped writing its heartbeat (it died or lost the database) are given back: the caller fails
- * their pg-boss jobs, which pg-boss then retries or, with no retries left, moves to the dead-letter queue.
- */
-export async function takeStalledFits(staleAfterMs: number): Promise<{ id: string; attempts: number }[]> {
-  return db
-    .update(fitRuns)
-    .set({ status: "queued", failureReason: sql`'attempt ' || ${fitRuns.attempts} || ': the worker stopped responding (no progress since ' || to_char(${fitRuns.progressAt} at time zone 'UTC', 'HH24:MI:SS') || ' UTC)'` })
-    .where(and(eq(fitRuns.status, "running"), lt(fitRuns.progressAt, new Date(Date.now() - staleAfterMs))))
-    .returning({ id: fitRuns.id, attempts: fitRuns.attempts });
 }

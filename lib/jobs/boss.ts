@@ -1,14 +1,17 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { serverEnv } from "@/lib/env";
-import { ensureQueues, fitJobLimits, QUEUES, type FitRunJob, type ReleaseEventJob } from "./queues";
+import { ensureQueues, fitJobLimits, JOB_SCHEMA, QUEUES, type FitRunJob, type ReleaseEventJob } from "./queues";
 
 const cache = globalThis as unknown as { bandgateBoss?: Promise<PgBoss> };
 
-/** A pg-boss instance for sending from the web process (no maintenance or schedules: the worker does those). */
+/**
+ * A pg-boss instance for sending from the web process (no maintenance or schedules: the worker does those). The app
+ * role may not change the queue's schema, so it checks the installed version instead of migrating it.
+ */
 export function jobQueue(): Promise<PgBoss> {
   cache.bandgateBoss ??= (async () => {
-    const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, max: 2, supervise: false, schedule: false });
+    const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, schema: JOB_SCHEMA, migrate: false, max: 2, supervise: false, schedule: false });
     boss.on("error", (err) => console.error("[bandgate] job queue", err.message));
     await boss.start();
     await ensureQueues(boss);

@@ -1,14 +1,22 @@
 import type PgBoss from "pg-boss";
 import { jobSettings } from "./settings";
 
-/** Queue names; every process creates them on start (pg-boss 10 needs a queue before its first job). */
+/** The queue's own schema, created and upgraded by the migration step as the owner role. */
+export const JOB_SCHEMA = "pgboss";
+/** application_name of a worker's queue sessions (pg_stat_activity). */
+export const WORKER_APPLICATION_NAME = "bandgate-worker";
+
+/**
+ * Queue names. pg-boss 10 needs a queue (a table of its own) before its first job: the migration step creates them as
+ * the owner role; every process checks for them on start, which changes nothing once they exist.
+ */
 export const QUEUES = {
   releaseEvent: "release-event",
   webhookDelivery: "webhook-delivery",
   registryMail: "registry-mail",
   rateWindowCleanup: "rate-window-cleanup",
   fitRun: "fit-run",
-  /** Fit jobs that used up their retries (a worker died each time) land here and are marked failed. */
+  /** Fit jobs that came back to the queue too often (FIT_JOB_RETURNS) land here and are marked failed. */
   fitRunDead: "fit-run-dead",
 } as const;
 
@@ -43,8 +51,14 @@ export function webhookJobOptions(deliveryId: string): PgBoss.SendOptions {
   return { id: deliveryId, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true };
 }
 
+/**
+ * pg-boss runs a fit job again after every graceful hand-back and every crash; which of them count is decided by the
+ * run's own crash count (FIT_RETRY_LIMIT), so pg-boss's limit only stops a job that keeps coming back without end.
+ */
+export const FIT_JOB_RETURNS = 100;
+
 /** Retries and expiry of a fit job: it expires a minute after the fit's own time limit, so only a dead worker's job expires. */
 export function fitJobLimits(): { retryLimit: number; retryDelay: number; expireInSeconds: number } {
   const s = jobSettings();
-  return { retryLimit: s.FIT_RETRY_LIMIT, retryDelay: 2, expireInSeconds: s.FIT_TIME_LIMIT_SECONDS + 60 };
+  return { retryLimit: FIT_JOB_RETURNS, retryDelay: 2, expireInSeconds: s.FIT_TIME_LIMIT_SECONDS + 60 };
 }

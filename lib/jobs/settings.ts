@@ -13,8 +13,10 @@ const schema = z.object({
   FIT_CONCURRENCY: z.coerce.number().int().min(1).max(64).optional(),
   /** A refit is stopped at its best point ("not converged") after this long; its job expires a minute later. */
   FIT_TIME_LIMIT_SECONDS: z.coerce.number().int().min(10).max(24 * 3600).default(1800),
-  /** Attempts after the first when a worker dies or its thread crashes. */
+  /** Crashes a refit survives (its worker died or its thread failed); the next one fails it. Graceful stops never count. */
   FIT_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
+  /** A running refit whose heartbeat is this old belongs to a dead worker: it counts a crash and is run again. */
+  FIT_STALL_SECONDS: z.coerce.number().int().min(5).max(3600).default(60),
   /** How often a running refit writes progress (and looks for a cancel request). */
   FIT_PROGRESS_MS: z.coerce.number().int().min(100).max(1000).default(400),
 });

@@ -7,7 +7,7 @@ import { serverEnv } from "@/lib/env";
 import { deliverWebhook } from "./deliver-webhook";
 import { fanOutReleaseEvent } from "./fan-out";
 import { failFit } from "@/lib/fits/worker-side";
-import { ensureQueues, QUEUES, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
+import { ensureQueues, FIT_JOB_RETURNS, JOB_SCHEMA, QUEUES, WORKER_APPLICATION_NAME, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
 import { runFitJob } from "./run-fit";
 import { giveBackStalledFits } from "./stalled-fits";
 import { requeueUnsentReleaseEvents } from "./unsent-release-events";
@@ -20,7 +20,9 @@ import { jobSettings } from "./settings";
  * to one of them. Each process runs up to FIT_CONCURRENCY refits at once, each in its own thread.
  * Start: node_modules/.bin/tsx --conditions=react-server lib/jobs/worker-main.ts
  */
-const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, max: 4 });
+// The queue's schema is installed and upgraded by the migration step (as the owner role), never by a worker.
+// Its sessions are named so an operator (and the fault tests) can see which workers are connected.
+const boss = new PgBoss({ connectionString: serverEnv().DATABASE_URL, schema: JOB_SCHEMA, migrate: false, max: 4, application_name: WORKER_APPLICATION_NAME });
 boss.on("error", (err) => console.error("[bandgate worker]", err.message));
 await boss.start();
 await ensureQueues(boss);
@@ -40,16 +42,24 @@ await boss.schedule(QUEUES.rateWindowCleanup, "17 * * * *");
 const shutdown = new AbortController();
 const fitSlots = jobSettings().FIT_CONCURRENCY ?? availableParallelism();
 for (let i = 0; i < fitSlots; i++) {
-  await boss.work<FitRunJob>(QUEUES.fitRun, { ...polling, batchSize: 1, includeMetadata: true }, async ([job]) =>
-    runFitJob({ fitId: job.data.fitId, retryCount: job.retryCount, retryLimit: job.retryLimit, shutdown: shutdown.signal }),
+  await boss.work<FitRunJob>(QUEUES.fitRun, { ...polling, batchSize: 1 }, async ([job]) =>
+    runFitJob({
+      fitId: job.data.fitId,
+      shutdown: shutdown.signal,
+      // Failing the job returns it to the queue; the run's own crash count is what the retry limit is checked against.
+      giveBack: async () => void (await boss.fail(QUEUES.fitRun, job.id, { reason: "handed back: the worker was stopping" })),
+    }),
   );
 }
 await boss.work<FitRunJob>(QUEUES.fitRunDead, polling, async ([job]) =>
-  failFit(job.data.fitId, "the worker running it stopped (crash or restart) on every attempt; no retries left"),
+  failFit(job.data.fitId, `the job came back to the queue more than ${FIT_JOB_RETURNS} times; no retries left`),
 );
+const { FIT_STALL_SECONDS, FIT_RETRY_LIMIT } = jobSettings();
 const sweeper = setInterval(() => {
-  giveBackStalledFits(boss).catch((err) => console.error("[bandgate worker] stalled-fit sweep failed", err instanceof Error ? err.message : err));
-}, 15_000);
+  giveBackStalledFits(boss, FIT_STALL_SECONDS * 1000, FIT_RETRY_LIMIT).catch((err) =>
+    console.error("[bandgate worker] stalled-fit sweep failed", err instanceof Error ? err.message : err),
+  );
+}, Math.min(15_000, (FIT_STALL_SECONDS * 1000) / 4));
 const resender = setInterval(() => {
   requeueUnsentReleaseEvents(boss)
     .then((ids) => ids.length && console.log(`[bandgate worker] re-queued ${ids.length} release event(s) that were never fanned out`))

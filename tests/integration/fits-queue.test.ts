@@ -6,8 +6,10 @@ import { fitRuns, revisions, users } from "@/db/schema";
 import { FINAL_FIT_STATUSES, outcomeOf, type FitOutcome } from "@/lib/fits/record";
 import { parseFitSpec } from "@/lib/fits/service";
 import { buildFitProblem } from "@/lib/fits/problem";
-import { claimFit, finishFit, loadRunContext } from "@/lib/fits/worker-side";
-import { QUEUES, type FitRunJob } from "@/lib/jobs/queues";
+import { claimFit } from "@/lib/fits/attempt";
+import { finishFit, loadRunContext } from "@/lib/fits/worker-side";
+import { fitJobLimits, QUEUES, type FitRunJob } from "@/lib/jobs/queues";
+import { jobSettings } from "@/lib/jobs/settings";
 import { giveBackStalledFits } from "@/lib/jobs/stalled-fits";
 import { fitDocument } from "@/lib/tb/analysis/fit-document";
 import { getParameter } from "@/lib/tb/parameters";
@@ -47,7 +49,7 @@ async function chainRunRow(extra: Partial<typeof fitRuns.$inferInsert> = {}, set
 }
 
 describe("a refit of the sp3s* model through the job queue", () => {
-  it("writes progress at least every second while it runs, converges, and lowers the cost at every accepted step", async () => {
+  it("writes progress well within the stall limit while it runs, converges, and lowers the cost at every accepted step", async () => {
     /*
      * 2500 k-points on the fcc path and one restart: about 3.5 s per start in the worker (measured), so the run lasts
      * several seconds. It converges (not merely stops): the reference is the model's own bands plus 3 meV noise and the
@@ -63,7 +65,8 @@ describe("a refit of the sp3s* model through the job queue", () => {
     const beats: number[] = [];
     const iterations = new Set<number>();
     let row = await fitRow(fitId);
-    const deadline = Date.now() + 25_000;
+    // A generous ceiling: alone the run takes a few seconds, on a machine busy with other work many times that.
+    const deadline = Date.now() + 150_000;
     while (!FINAL_FIT_STATUSES.includes(row.status) && Date.now() < deadline) {
       const at = row.progressAt?.getTime();
       if (row.status === "running" && at !== undefined && at !== beats.at(-1)) beats.push(at);
@@ -74,7 +77,8 @@ describe("a refit of the sp3s* model through the job queue", () => {
     expect(row.status, row.failureReason ?? "").toBe("converged");
     expect(beats.length).toBeGreaterThanOrEqual(3);
     const gaps = beats.slice(1).map((t, i) => t - beats[i]);
-    expect(Math.max(...gaps), `gaps between progress writes: ${gaps.join(", ")} ms`).toBeLessThan(1000);
+    // A live fit must never look stalled: its heartbeat (every FIT_PROGRESS_MS) stays far inside the stall limit.
+    expect(Math.max(...gaps), `gaps between progress writes: ${gaps.join(", ")} ms`).toBeLessThan((jobSettings().FIT_STALL_SECONDS * 1000) / 4);
     expect(iterations.size, "distinct iterations seen while running").toBeGreaterThanOrEqual(3);
 
     // Each start is its own Levenberg–Marquardt descent: a step is accepted only when it lowers the cost (Marquardt,
@@ -96,56 +100,60 @@ describe("a refit of the sp3s* model through the job queue", () => {
     // Recovery within 3 standard errors, as for the chain (Press et al., Numerical Recipes, 2nd ed. (1992), §15.6).
     const se = outcome.standardErrors as number[];
     DIAMOND_KEYS.forEach((key, i) => expect(Math.abs(outcome.values[i] - getParameter(diamond, key)), key).toBeLessThan(3 * se[i]));
-  });
+  }, 180_000);
 });
 
 describe("a worker that dies holding a refit", () => {
   let boss: PgBoss;
 
   beforeAll(async () => {
-    boss = new PgBoss({ connectionString: process.env.DATABASE_URL, max: 2, supervise: false, schedule: false });
+    boss = new PgBoss({ connectionString: process.env.DATABASE_URL, migrate: false, max: 2, supervise: false, schedule: false });
     await boss.start();
   });
   afterAll(() => boss.stop({ graceful: false, wait: true }));
 
+  const { FIT_RETRY_LIMIT } = jobSettings();
+  const STALL_MS = 60_000;
+
   /**
-   * A run and its job as startFit makes them, taken and claimed by a worker that then dies. The job is sent with a
-   * start time an hour away, so the real worker (which only fetches jobs due now) cannot take it first; this test
-   * fetches it with the same query a worker uses, ignoring that start time, and claims the run as runFitJob would.
+   * A run and its job as startFit makes them, taken and claimed by a worker that then dies, after `crashes` earlier
+   * crashes. The job is sent with a start time an hour away, so the real worker (which only fetches jobs due now)
+   * cannot take it first; this test fetches it with the same query a worker uses, ignoring that start time, and
+   * claims the run as runFitJob would. Its last heartbeat is then made two minutes old, past the stall limit.
    */
-  async function runHeldByDeadWorker(retryLimit: number): Promise<string> {
-    const { run } = await chainRunRow();
+  async function runHeldByDeadWorker(crashes: number): Promise<string> {
+    const { run } = await chainRunRow({ crashes });
     const startAfter = new Date(Date.now() + 3600_000);
-    await boss.send(QUEUES.fitRun, { fitId: run.id } satisfies FitRunJob, { id: run.id, retryLimit, retryDelay: 1, expireInSeconds: 600, priority: 1000, startAfter });
+    await boss.send(QUEUES.fitRun, { fitId: run.id } satisfies FitRunJob, { ...fitJobLimits(), id: run.id, retryDelay: 1, priority: 1000, startAfter });
     const [job] = await boss.fetch<FitRunJob>(QUEUES.fitRun, { ignoreStartAfter: true });
     expect(job?.id, "the test's own job comes first (highest priority)").toBe(run.id);
-    expect((await claimFit(run.id))?.attempts).toBe(1);
-    // The worker dies: no more progress. Its last heartbeat is made two minutes old, past the stall limit of one minute.
-    await db.update(fitRuns).set({ progressAt: new Date(Date.now() - 120_000) }).where(eq(fitRuns.id, run.id));
-    expect(await giveBackStalledFits(boss)).toBeGreaterThanOrEqual(1);
-    const back = await fitRow(run.id);
-    expect(back.status).toBe("queued");
-    expect(back.failureReason).toMatch(/^attempt 1: the worker stopped responding \(no progress since \d\d:\d\d:\d\d UTC\)$/);
+    expect((await claimFit(run.id, FIT_RETRY_LIMIT))?.attempts).toBe(1);
+    await db.update(fitRuns).set({ progressAt: new Date(Date.now() - 2 * STALL_MS) }).where(eq(fitRuns.id, run.id));
+    // The running worker's own sweep may get there first; either way the run is given back once.
+    await giveBackStalledFits(boss, STALL_MS, FIT_RETRY_LIMIT);
     return run.id;
   }
 
-  it("gives the job back to the queue, and a live worker finishes it on the second attempt", async () => {
-    const fitId = await runHeldByDeadWorker(1);
+  it("counts a crash, gives the job back to the queue, and a live worker finishes it on the second attempt", async () => {
+    const fitId = await runHeldByDeadWorker(0);
+    const back = await fitRow(fitId);
+    expect([back.status, back.crashes]).toEqual(["queued", 1]);
+    expect(back.failureReason).toMatch(/^attempt 1: the worker stopped responding \(no progress since \d\d:\d\d:\d\d UTC\)$/);
+    expect(back.interruptions).toEqual([{ at: expect.any(String), by: "crash", iteration: 0, cost: null }]);
     expect((await boss.getJobById(QUEUES.fitRun, fitId))?.state).toBe("retry");
     const row = await finishedFit(fitId);
     expect(row.status, row.failureReason ?? "").toBe("converged");
-    expect(row.attempts).toBe(2);
+    expect([row.attempts, row.crashes]).toEqual([2, 1]);
     expect(row.outcome?.values.length).toBe(CHAIN_KEYS.length);
   });
 
-  it("with no retries left, moves the job to the dead-letter queue and marks the run failed with a reason", async () => {
-    const fitId = await runHeldByDeadWorker(0);
-    expect((await boss.getJobById(QUEUES.fitRun, fitId))?.state).toBe("failed");
-    const row = await finishedFit(fitId);
-    expect(row.status).toBe("failed");
-    expect(row.attempts).toBe(1);
-    expect(row.failureReason).toBe("the worker running it stopped (crash or restart) on every attempt; no retries left");
+  it("with no retries left, marks the run failed with a reason and cancels its job", async () => {
+    const fitId = await runHeldByDeadWorker(FIT_RETRY_LIMIT);
+    const row = await fitRow(fitId);
+    expect([row.status, row.attempts, row.crashes]).toEqual(["failed", 1, FIT_RETRY_LIMIT + 1]);
+    expect(row.failureReason).toMatch(new RegExp(`^crashed ${FIT_RETRY_LIMIT + 1} times, more than the ${FIT_RETRY_LIMIT} allowed; no retries left \\(last: attempt 1: the worker stopped responding`));
     expect(row.outcome).toBeNull();
+    expect((await boss.getJobById(QUEUES.fitRun, fitId))?.state).toBe("cancelled");
     // Whoever started it hears about a failure by e-mail, with the reason and a link to the record.
     const [starter] = await db.select({ email: users.email }).from(users).where(eq(users.id, row.startedBy));
     const [mail] = await waitFor("the failure notice", async () => {

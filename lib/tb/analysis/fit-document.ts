@@ -3,8 +3,9 @@ import { compileModel } from "../model";
 import { mirrorBondKey } from "../orbitals";
 import { listParameters, setParameters } from "../parameters";
 import type { ReferenceBands } from "./compare-reference";
-import { fitBandModel, selectWeightedPairs, type FitModel, type FitResult } from "./fit";
+import { bandFitResultAt, fitBandModel, selectWeightedPairs, type DescentEnd, type FitModel, type FitResult } from "./fit";
 import { FitInputError, validateFitInput, validatePointCount, type BandFitOptions } from "./fit-input";
+import type { LmState } from "./levenberg-marquardt";
 import { buildResiduals, type WeightedPair } from "./fit-residuals";
 import { computeFitStatistics } from "./fit-statistics";
 import { spinDegeneracyOf } from "./model-solver";
@@ -15,7 +16,10 @@ import { buildDerivativeModels, computeBandDerivatives } from "./sensitivity";
  * Fit of chosen document parameters (keys from listParameters) to reference bands. The Jacobian is exact and cheap:
  * ∂E_n(k)/∂p by Hellmann–Feynman with the fixed ∂H/∂p models (H is linear in every parameter).
  */
-export interface DocumentFitOptions extends BandFitOptions {
+export interface DocumentFitOptions extends Omit<BandFitOptions, "onProgress"> {
+  onProgress?: (p: DocumentFitProgress) => void;
+  /** Continue an interrupted fit of the same document, keys, reference and options from this checkpoint. */
+  resume?: FitCheckpoint;
   /** Start values by key; default: the document's values. */
   start?: Record<string, number>;
   /**
@@ -31,6 +35,29 @@ export interface RestartOutcome {
   status: FitResult["status"];
   cost: number;
   iterations: number;
+}
+
+/**
+ * Where a document fit stands after an accepted step: the start in progress and its minimiser state, and how the
+ * starts before it ended. Resuming from it gives, to the bit, the result the fit would have given without stopping.
+ */
+export interface FitCheckpoint {
+  /** The start in progress: 0 for the document's values, then the seeded starts. */
+  run: number;
+  lm: LmState;
+  /** How each start before it ended. */
+  finished: DescentEnd[];
+  /** Iterations over all starts so far, and the lowest cost reached. */
+  iteration: number;
+  cost: number;
+  elapsedMs: number;
+}
+
+export interface DocumentFitProgress {
+  iteration: number;
+  cost: number;
+  elapsedMs: number;
+  checkpoint: FitCheckpoint;
 }
 
 export interface DocumentFitResult extends FitResult {
@@ -75,7 +102,7 @@ function prepareDocumentFit(doc: ModelDocument, keys: string[], reference: Refer
   return {
     start,
     model: { evaluate: (p) => computeBandDerivatives(compileModel(withValues(p)), derivativeModels, reference.kFrac) },
-    options: { ...opts, occupiedBands },
+    options: { ...opts, onProgress: undefined, occupiedBands },
     withValues,
   };
 }
@@ -132,24 +159,43 @@ export function restartPoint(start: number[], lower: number[] | undefined, upper
 
 export async function fitDocument(doc: ModelDocument, keys: string[], reference: ReferenceBands, opts: DocumentFitOptions = {}): Promise<DocumentFitResult> {
   const t0 = Date.now();
+  const resume = opts.resume;
+  const elapsed = () => (resume?.elapsedMs ?? 0) + Date.now() - t0;
   const prepared = prepareDocumentFit(doc, keys, reference, opts);
   const restarts = opts.restarts ?? 0;
   if (!Number.isInteger(restarts) || restarts < 0) throw new FitInputError("fit: restarts must be a whole number ≥ 0");
+  if (resume && !(Number.isInteger(resume.run) && resume.run >= 0 && resume.run <= restarts && resume.finished.length === resume.run)) {
+    throw new FitInputError("fit: the checkpoint does not belong to this fit");
+  }
   const next = seededUniform(opts.seed ?? 1);
   let iterationsBefore = 0;
   let best: FitResult | null = null;
   let startRms = NaN;
   const starts: RestartOutcome[] = [];
+  const ends: DescentEnd[] = [];
   for (let run = 0; run <= restarts; run++) {
+    // Drawn for every start, also those finished before a resume, so the seeded sequence stays the same.
     const start = run === 0 ? prepared.start : restartPoint(prepared.start, opts.lower, opts.upper, next);
     const offset = iterationsBefore;
-    const result = await fitBandModel(prepared.model, keys, start, reference, {
-      ...prepared.options,
-      onProgress: opts.onProgress && ((p) => opts.onProgress?.({ ...p, iteration: offset + p.iteration, elapsedMs: Date.now() - t0 })),
-    });
+    const bestBefore = best === null ? Infinity : best.cost;
+    const earlier = resume && run < resume.run ? resume.finished[run] : undefined;
+    const result = earlier
+      ? bandFitResultAt(prepared.model, keys, start, reference, prepared.options, earlier)
+      : await fitBandModel(prepared.model, keys, start, reference, {
+          ...prepared.options,
+          resume: run === resume?.run ? resume.lm : undefined,
+          onProgress:
+            opts.onProgress &&
+            ((p) => {
+              const iteration = offset + p.iteration;
+              const checkpoint = { run, lm: p.state, finished: [...ends], iteration, cost: Math.min(bestBefore, p.cost), elapsedMs: elapsed() };
+              opts.onProgress?.({ iteration, cost: p.cost, elapsedMs: checkpoint.elapsedMs, checkpoint });
+            }),
+        });
     iterationsBefore += result.iterations;
     if (run === 0) startRms = result.startRms;
     starts.push({ start, status: result.status, cost: result.cost, iterations: result.iterations });
+    ends.push({ status: result.status, reason: result.reason, values: result.values, iterations: result.iterations, cost: result.cost });
     best = pick(best, result);
     if (result.status === "cancelled") break;
   }
@@ -161,7 +207,7 @@ export async function fitDocument(doc: ModelDocument, keys: string[], reference:
     start: prepared.start,
     startRms,
     iterations: iterationsBefore,
-    elapsedMs: Date.now() - t0,
+    elapsedMs: elapsed(),
     document: prepared.withValues(chosen.values),
     starts,
   };

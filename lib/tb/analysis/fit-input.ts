@@ -1,4 +1,13 @@
 import type { Alignment, ReferenceBands } from "./compare-reference";
+import type { LmState } from "./levenberg-marquardt";
+
+export interface BandFitProgress {
+  iteration: number;
+  cost: number;
+  elapsedMs: number;
+  /** Where the minimiser stands: resuming from it continues the fit exactly. */
+  state: LmState;
+}
 
 /** Options shared by the band fit of a plain band model and of a document. */
 export interface BandFitOptions {
@@ -17,7 +26,7 @@ export interface BandFitOptions {
   lower?: number[];
   upper?: number[];
   maxIterations?: number;
-  onProgress?: (p: { iteration: number; cost: number; elapsedMs: number }) => void;
+  onProgress?: (p: BandFitProgress) => void;
   signal?: AbortSignal;
 }
 

@@ -2,7 +2,7 @@ import { computeAlignmentShift, selectReferencePairs, type BandError, type Refer
 import { computeFitStatistics, type FitStatistics } from "./fit-statistics";
 import { validateFitInput, validatePointCount, type BandFitOptions } from "./fit-input";
 import { buildResiduals, type FitEvaluation, type WeightedPair } from "./fit-residuals";
-import { minimiseLeastSquares, type LmStatus } from "./levenberg-marquardt";
+import { minimiseLeastSquares, type LmState, type LmStatus } from "./levenberg-marquardt";
 
 /**
  * Levenberg–Marquardt fit of a band model to reference bands (see levenberg-marquardt.ts for the method).
@@ -34,46 +34,80 @@ export interface FitResult {
   elapsedMs: number;
 }
 
+/** Where one descent ended, enough to rebuild its FitResult without running it again. */
+export interface DescentEnd {
+  status: LmStatus;
+  reason: string;
+  values: number[];
+  iterations: number;
+  cost: number;
+}
+
+interface PreparedBandFit {
+  model: FitModel;
+  pairs: WeightedPair[];
+  startRms: number;
+}
+
+/** The points of a descent, chosen at its start values, and the RMS error there. */
+function prepareBandFit(model: FitModel, names: string[], start: number[], reference: ReferenceBands, opts: BandFitOptions): PreparedBandFit {
+  validateFitInput(names, start, reference, opts);
+  model = rememberLastTwo(model);
+  const first = model.evaluate(Float64Array.from(start));
+  if (first.energies.length !== reference.energies.length) throw new Error("fit: the model must be evaluated at the reference k-points");
+  const { pairs } = selectWeightedPairs(first.energies, reference, opts);
+  validatePointCount(pairs.length, names.length, opts.window);
+  const startRms = errorsOf(buildResiduals(first, pairs, reference, opts, names.length).r, pairs).rms;
+  return { model, pairs, startRms };
+}
+
+function resultAt(prep: PreparedBandFit, names: string[], start: number[], reference: ReferenceBands, opts: BandFitOptions, end: DescentEnd, t0: number): FitResult {
+  const P = names.length;
+  const final = buildResiduals(prep.model.evaluate(Float64Array.from(end.values)), prep.pairs, reference, opts, P);
+  return {
+    status: end.status,
+    reason: end.reason,
+    names,
+    start: [...start],
+    values: [...end.values],
+    iterations: end.iterations,
+    cost: end.cost,
+    shift: final.shift,
+    startRms: prep.startRms,
+    ...errorsOf(final.r, prep.pairs),
+    statistics: computeFitStatistics(final.r, final.jac, P),
+    elapsedMs: Date.now() - t0,
+  };
+}
+
+/** One descent from `start`; with `resume`, it continues from that state of the same descent. */
 export async function fitBandModel(
   model: FitModel,
   names: string[],
   start: number[],
   reference: ReferenceBands,
-  opts: BandFitOptions = {},
+  opts: BandFitOptions & { resume?: LmState } = {},
 ): Promise<FitResult> {
   const t0 = Date.now();
-  validateFitInput(names, start, reference, opts);
+  const prep = prepareBandFit(model, names, start, reference, opts);
   const P = names.length;
-  model = rememberLastTwo(model);
-  const first = model.evaluate(Float64Array.from(start));
-  if (first.energies.length !== reference.energies.length) throw new Error("fit: the model must be evaluated at the reference k-points");
-  const { pairs } = selectWeightedPairs(first.energies, reference, opts);
-  validatePointCount(pairs.length, P, opts.window);
-  const startRms = errorsOf(buildResiduals(first, pairs, reference, opts, P).r, pairs).rms;
   const lm = await minimiseLeastSquares(
-    { evaluate: (p) => buildResiduals(model.evaluate(p), pairs, reference, opts, P), lower: bound(opts.lower, P, -Infinity), upper: bound(opts.upper, P, Infinity) },
+    { evaluate: (p) => buildResiduals(prep.model.evaluate(p), prep.pairs, reference, opts, P), lower: bound(opts.lower, P, -Infinity), upper: bound(opts.upper, P, Infinity) },
     Float64Array.from(start),
     {
       maxIterations: opts.maxIterations,
       signal: opts.signal,
-      onProgress: opts.onProgress && ((p) => opts.onProgress?.({ iteration: p.iteration, cost: p.cost, elapsedMs: p.elapsedMs })),
+      resume: opts.resume,
+      onProgress: opts.onProgress && ((p) => opts.onProgress?.({ iteration: p.iteration, cost: p.cost, elapsedMs: p.elapsedMs, state: p.state })),
     },
   );
-  const final = buildResiduals(model.evaluate(lm.parameters), pairs, reference, opts, P);
-  return {
-    status: lm.status,
-    reason: lm.reason,
-    names,
-    start: [...start],
-    values: Array.from(lm.parameters),
-    iterations: lm.iterations,
-    cost: lm.cost,
-    shift: final.shift,
-    startRms,
-    ...errorsOf(final.r, pairs),
-    statistics: computeFitStatistics(final.r, final.jac, P),
-    elapsedMs: Date.now() - t0,
-  };
+  return resultAt(prep, names, start, reference, opts, { ...lm, values: Array.from(lm.parameters) }, t0);
+}
+
+/** The result of a descent that ended earlier (in an attempt that was interrupted later), without running it again. */
+export function bandFitResultAt(model: FitModel, names: string[], start: number[], reference: ReferenceBands, opts: BandFitOptions, end: DescentEnd): FitResult {
+  const t0 = Date.now();
+  return resultAt(prepareBandFit(model, names, start, reference, opts), names, start, reference, opts, end, t0);
 }
 
 /**

@@ -16,11 +16,25 @@ export interface LeastSquaresProblem {
   upper?: Float64Array;
 }
 
+/**
+ * The minimiser's whole state after an accepted step (ν is 2 after every accepted step): resuming from it repeats
+ * exactly what an uninterrupted run would have done next.
+ */
+export interface LmState {
+  parameters: number[];
+  damping: number;
+  iteration: number;
+  cost: number;
+  /** The step's relative cost decrease was below the tolerance: the run converged at this step. */
+  settled: boolean;
+}
+
 export interface LmProgress {
   iteration: number;
   cost: number;
   elapsedMs: number;
   damping: number;
+  state: LmState;
 }
 
 export interface LmOptions {
@@ -33,6 +47,8 @@ export interface LmOptions {
   gradientTolerance?: number;
   onProgress?: (p: LmProgress) => void;
   signal?: AbortSignal;
+  /** Continue from this state (of the same problem) instead of starting at the start point. */
+  resume?: LmState;
 }
 
 export type LmStatus = "converged" | "not converged" | "cancelled";
@@ -82,17 +98,19 @@ export async function minimiseLeastSquares(problem: LeastSquaresProblem, start: 
   const xtol = opts.stepTolerance ?? 1e-10;
   const gtol = opts.gradientTolerance ?? 1e-12;
   const { lower, upper } = problem;
-  let p = Float64Array.from(start);
+  const resume = opts.resume;
+  let p = Float64Array.from(resume?.parameters ?? start);
   project(p, lower, upper);
   let cur = problem.evaluate(p);
   let cost = costOf(cur.r);
   const m = cur.r.length;
-  let mu = -1;
+  let mu = resume?.damping ?? -1;
   let nu = 2;
   const done = (status: LmStatus, reason: string, iterations: number): LmResult =>
     ({ status, reason, parameters: p, cost, iterations, r: cur.r, jac: cur.jac });
+  if (resume?.settled) return done("converged", "cost change below tolerance", resume.iteration);
   let lastYield = -Infinity;
-  for (let iter = 1; iter <= maxIterations; iter++) {
+  for (let iter = (resume?.iteration ?? 0) + 1; iter <= maxIterations; iter++) {
     if (Date.now() - lastYield >= YIELD_EVERY_MS) {
       await yieldToEventLoop();
       lastYield = Date.now();
@@ -135,8 +153,9 @@ export async function minimiseLeastSquares(problem: LeastSquaresProblem, start: 
         mu *= Math.max(1 / 3, 1 - (2 * rho - 1) ** 3);
         nu = 2;
         accepted = true;
-        opts.onProgress?.({ iteration: iter, cost, elapsedMs: Date.now() - t0, damping: mu });
-        if (relDecrease <= ftol) return done("converged", "cost change below tolerance", iter);
+        const settled = relDecrease <= ftol;
+        opts.onProgress?.({ iteration: iter, cost, elapsedMs: Date.now() - t0, damping: mu, state: { parameters: Array.from(p), damping: mu, iteration: iter, cost, settled } });
+        if (settled) return done("converged", "cost change below tolerance", iter);
       } else {
         mu *= nu;
         nu *= 2;

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { appendCost, COST_HISTORY_LIMIT, fitRevisionNote, outcomeOf, statusOfOutcome, type CostPoint } from "@/lib/fits/record";
 import { compareReproduction } from "@/lib/fits/reproduce";
+import { describeResumes } from "@/lib/fits/view";
 import { describeFitWeights, fittedDocument, fittedEnergyRange } from "@/lib/fits/result-document";
 import { submissionProblems } from "@/board/submission";
 import { fitDocument } from "@/lib/tb/analysis/fit-document";
@@ -127,5 +128,20 @@ describe("which finished fits are worth an e-mail", () => {
     expect(shouldMailFit("not_converged", MAIL_FITS_AFTER_MS + 1)).toBe(true);
     expect(shouldMailFit("converged", MAIL_FITS_AFTER_MS - 1)).toBe(false);
     expect(shouldMailFit("cancelled", 10 * MAIL_FITS_AFTER_MS)).toBe(false);
+  });
+});
+
+describe("how the record tells a resumed run", () => {
+  it("says nothing for a run in one go, and names each stop or crash and the iteration it resumed from", () => {
+    expect(describeResumes([])).toBeNull();
+    const at = "2026-01-01T00:00:00Z";
+    expect(describeResumes([{ at, by: "crash", iteration: 0, cost: null }])).toBe("Resumed once from its best point so far: after a crash before its first step (from the start).");
+    expect(
+      describeResumes([
+        { at, by: "crash", iteration: 7, cost: 0.5 },
+        { at, by: "stop", iteration: 12, cost: 0.2 },
+        { at, by: "stop", iteration: 20, cost: 0.1 },
+      ]),
+    ).toBe("Resumed 3 times from its best point so far: after a crash at iteration 7, after a worker stop at iteration 12, after a worker stop at iteration 20.");
   });
 });

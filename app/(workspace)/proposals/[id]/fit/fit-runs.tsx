@@ -88,7 +88,7 @@ export function FitRuns({ proposalId, viewerId, isAdmin, canSave, canRerun, vers
                 {f.rerunOf ? "Re-run of a stored fit" : "Refit"} of {f.parameters.length} parameter{f.parameters.length === 1 ? "" : "s"} from r{f.baseRevision} to “{f.referenceName}”
               </span>
               <span className="text-xs text-ink-soft">
-                by {f.startedBy} · {f.createdAt.slice(0, 16).replace("T", " ")} UTC{f.attempts > 1 ? ` · attempt ${f.attempts}` : ""}
+                by {f.startedBy} · {f.createdAt.slice(0, 16).replace("T", " ")} UTC{f.attempts > 1 ? ` · attempt ${f.attempts}` : ""}{f.interruptions.length > 0 ? ` · resumed ${f.interruptions.length}×` : ""}
               </span>
               <Link href={`/proposals/${proposalId}/fits/${f.id}`} className="ml-auto text-copper-deep underline">
                 Fit record →

@@ -89,7 +89,16 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
               </>
             ) : null}
             <dt>Attempts</dt>
-            <dd className="num">{run.attempts}</dd>
+            <dd className="num">
+              {run.attempts}
+              {run.crashes > 0 ? ` (${run.crashes} ended in a crash)` : ""}
+            </dd>
+            {fit.resumed ? (
+              <>
+                <dt>Interruptions</dt>
+                <dd data-testid="fit-resumed">{fit.resumed}</dd>
+              </>
+            ) : null}
           </dl>
         </Section>
         <Section title="Inputs (enough to run it again)">
@@ -182,6 +191,12 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
         </Section>
         <Section title="Reproducibility">
           {comparisons.length === 0 ? <p className="text-sm text-ink-soft">Not re-run yet. A re-run repeats this record exactly (same revision, reference, settings and seed) and must give the same values.</p> : null}
+          {fit.resumed ? (
+            <p className="text-sm text-ink-soft">
+              This run was resumed from checkpoints. A resumed fit continues the minimiser exactly where it stood, so its values do not depend on the
+              interruptions: a re-run in one go must give the same values, and a difference would show here.
+            </p>
+          ) : null}
           {view.may.rerunFit && !fit.active && run.status !== "failed" ? <RerunButton proposalId={id} fitId={run.id} /> : null}
           <ul className="space-y-1 text-sm" data-testid="fit-reproduction">
             {comparisons.map((c) => (
