@@ -95,12 +95,12 @@ describe("deliveries by the worker", () => {
       const tried = (await deliveriesNow()).map((d) => d.id);
       const logged = tried.length ? await db.selectDistinct({ id: webhookAttempts.deliveryId }).from(webhookAttempts).where(inArray(webhookAttempts.deliveryId, tried)) : [];
       return tried.length === ids.length && logged.length === ids.length;
-    });
+    }, 60);
     expect(inside.received).toHaveLength(0);
     const deliveries = await waitFor("every delivery to be settled", async () => {
       const rows = await deliveriesNow();
       return rows.every((r) => r.status !== "pending") ? rows : null;
-    });
+    }, 60);
     expect(listed.received.filter((r) => r.path === `/${world.familySlug}`)).toHaveLength(1);
     for (const sub of refusedSubs) {
       const delivery = deliveries.find((d) => d.subscriptionId === sub.id)!;
@@ -109,7 +109,7 @@ describe("deliveries by the worker", () => {
       expect(attempts.map((a) => [a.statusCode, a.error, a.responseExcerpt]), sub.url).toEqual([[null, REFUSED, null]]);
     }
     expect(deliveries.find((d) => d.subscriptionId === listedSub.id)?.status).toBe("delivered");
-  });
+  }, 150_000);
 });
 
 describe("a name that answers differently over time (DNS rebinding)", () => {

@@ -52,13 +52,13 @@ describe("a deactivated account's subscriptions", () => {
     const deliveries = await waitFor("the active subscriber's delivery", async () => {
       const rows = await db.select().from(webhookDeliveries).where(eq(webhookDeliveries.eventId, event.id));
       return rows.length > 0 && rows.every((r) => r.status !== "pending") ? rows : null;
-    });
+    }, 60);
     expect(deliveries.map((d) => d.status)).toEqual(["delivered"]);
     expect(hitsOn(`/${kept.id}`)).toHaveLength(1);
     expect(hitsOn(`/${gone.id}`)).toHaveLength(0);
     await waitFor("the active follower's e-mail", async () => (await mailTo(kept.email)).length === 1);
     expect(await mailTo(gone.email)).toHaveLength(0);
-  });
+  }, 120_000);
 
   it("leave a pending delivery unsent when the account is deactivated before it goes out, and the log says why", async () => {
     const { world, eventId } = await fannedOutRelease();
