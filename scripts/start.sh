@@ -14,8 +14,9 @@ if [ -z "${DATABASE_URL:-}" ]; then
   pg_up "$PWD/.data/pg" 54329
   ensure_database 54329 bandgate
   ensure_roles 54329 bandgate
-  # A local demo may send webhooks to receivers on this machine; a deployment with its own database may not.
-  export WEBHOOK_ALLOW_PRIVATE="${WEBHOOK_ALLOW_PRIVATE:-true}"
+  # A local demo may send webhooks to receivers on this machine (loopback only); a deployment with its own database
+  # names its own networks, if any.
+  export WEBHOOK_ALLOW_NETWORKS="${WEBHOOK_ALLOW_NETWORKS-127.0.0.0/8,::1/128}"
 fi
 ensure_auth_secret
 export NEXTAUTH_URL="${NEXTAUTH_URL:-http://localhost:$PORT}"

@@ -27,7 +27,9 @@ wait_for_port "$SMTP_PORT" 30 || { log "the local mail catcher did not start"; e
 build_if_needed
 # Deliveries retry after about 1–2 s here (15 s and doubling in production), so the retry test stays short.
 export WEBHOOK_RETRY_DELAY_SECONDS=1
-export WEBHOOK_ALLOW_PRIVATE=true   # test receivers listen on 127.0.0.1
+# The one non-public address webhooks may reach in tests: receivers that should get deliveries listen on 127.0.0.2;
+# 127.0.0.1 (and every other address) stands for the internal network no webhook may reach.
+export WEBHOOK_ALLOW_NETWORKS=127.0.0.2/32
 
 status=0
 # The fault tests start, kill and stop worker processes of their own, so they run before the shared worker starts.

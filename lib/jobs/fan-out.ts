@@ -16,7 +16,8 @@ function mailJobId(eventId: string, userId: string): string {
 
 /**
  * One release event → one signed delivery per active webhook subscription of the family and one e-mail per
- * subscriber, each its own job. Idempotent: deliveries are unique per (event, subscription) and jobs carry fixed ids.
+ * subscriber, each its own job; subscriptions and follows of deactivated accounts get nothing. Idempotent:
+ * deliveries are unique per (event, subscription) and jobs carry fixed ids.
  * Marks the event fanned out at the end, so a sweep can tell events whose job was never queued or was lost.
  */
 export async function fanOutReleaseEvent(boss: PgBoss, eventId: string): Promise<void> {
@@ -33,7 +34,8 @@ export async function fanOutReleaseEvent(boss: PgBoss, eventId: string): Promise
   const subs = await db
     .select({ id: webhookSubscriptions.id })
     .from(webhookSubscriptions)
-    .where(and(eq(webhookSubscriptions.familyId, ctx.familyId), eq(webhookSubscriptions.active, true)));
+    .innerJoin(users, eq(users.id, webhookSubscriptions.userId))
+    .where(and(eq(webhookSubscriptions.familyId, ctx.familyId), eq(webhookSubscriptions.active, true), eq(users.active, true)));
   if (subs.length) {
     await db.insert(webhookDeliveries).values(subs.map((s) => ({ eventId, subscriptionId: s.id, body }))).onConflictDoNothing();
   }

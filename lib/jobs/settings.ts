@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { parseNetworks } from "@/lib/registry/webhook-target";
 
 /** Job-queue settings, read and validated once; the defaults suit production, tests shorten the retry delay. */
 const schema = z.object({
@@ -7,8 +8,18 @@ const schema = z.object({
   /** Base delay; pg-boss doubles it on each retry (with jitter): 15 s, 30 s, 1 min, … about 1 h by the 8th. */
   WEBHOOK_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(15),
   WEBHOOK_TIMEOUT_MS: z.coerce.number().int().min(100).max(60_000).default(10_000),
-  /** Local set-ups only (npm start, npm test): let webhooks reach private and loopback addresses. */
-  WEBHOOK_ALLOW_PRIVATE: z.enum(["true", "false"]).default("false").transform((v) => v === "true"),
+  /** Networks (comma-separated CIDR) webhooks may reach although they are not public, e.g. a local receiver's 127.0.0.1/32. */
+  WEBHOOK_ALLOW_NETWORKS: z
+    .string()
+    .default("")
+    .transform((text, ctx) => {
+      try {
+        return parseNetworks(text);
+      } catch (err) {
+        ctx.addIssue({ code: "custom", message: err instanceof Error ? err.message : String(err) });
+        return z.NEVER;
+      }
+    }),
   /** Refits one worker process runs at once, each in its own thread. Default: the machine's cores. */
   FIT_CONCURRENCY: z.coerce.number().int().min(1).max(64).optional(),
   /** A refit is stopped at its best point ("not converged") after this long; its job expires a minute later. */

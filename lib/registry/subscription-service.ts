@@ -8,7 +8,7 @@ import { AppError } from "@/lib/errors";
 import { jobSettings } from "@/lib/jobs/settings";
 import { resolveHost } from "./resolve-host";
 import type { WebhookInput } from "./schemas";
-import { webhookTargetProblem } from "./webhook-target";
+import { NOT_PUBLIC, webhookTargetProblem, type Resolver } from "./webhook-target";
 
 async function familyIdOf(slug: string): Promise<string> {
   const [row] = await db.select({ id: modelFamilies.id }).from(modelFamilies).where(eq(modelFamilies.slug, slug));
@@ -16,9 +16,14 @@ async function familyIdOf(slug: string): Promise<string> {
   return row.id;
 }
 
-export async function addWebhook(actor: SessionUser, input: WebhookInput): Promise<{ id: string }> {
+/** `resolve` is the name service used for the check (tests give their own). */
+export async function addWebhook(actor: SessionUser, input: WebhookInput, resolve: Resolver = resolveHost): Promise<{ id: string }> {
   const familyId = await familyIdOf(input.familySlug);
-  const problem = await webhookTargetProblem(input.url, resolveHost, jobSettings().WEBHOOK_ALLOW_PRIVATE);
+  const problem = await webhookTargetProblem(input.url, resolve, jobSettings().WEBHOOK_ALLOW_NETWORKS);
+  if (problem === NOT_PUBLIC) {
+    const why = "it is not a public address (loopback, private, link-local and other special-purpose addresses are never called)";
+    throw new AppError("invalid:webhook-url", `Bandgate will not call that address: ${why}.`, { url: ["Not a public address: give one reachable from the internet."] });
+  }
   if (problem) throw new AppError("invalid:webhook-url", `Bandgate will not call that address: ${problem}.`, { url: [`Not allowed: ${problem}.`] });
   return db.transaction(async (tx) => {
     const [row] = await tx.insert(webhookSubscriptions).values({ userId: actor.id, familyId, url: input.url, secret: input.secret }).returning({ id: webhookSubscriptions.id });

@@ -1,6 +1,4 @@
 import { createHmac } from "node:crypto";
-import { createServer, type Server } from "node:http";
-import type { AddressInfo } from "node:net";
 import { eq } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
@@ -9,34 +7,18 @@ import { stopJobQueue } from "@/lib/jobs/boss";
 import { addWebhook, setFollowing } from "@/lib/registry/subscription-service";
 import { mailTo } from "@/tests/support/mailbox";
 import { createPerson } from "@/tests/support/people";
+import { startReceiver, type Receiver } from "@/tests/support/webhook-receiver";
 import { acceptedProposal, releaseAccepted, waitFor } from "./registry-world";
 
-/** A webhook receiver on 127.0.0.1 that answers with the next status in its script (then 200). */
-interface Received {
-  headers: Record<string, string | string[] | undefined>;
-  body: string;
-}
-let server: Server;
-let port = 0;
-const received: Received[] = [];
-let script: number[] = [];
+/** Receives on 127.0.0.2, the one non-public address the test set-up lets webhooks reach (scripts/test.sh). */
+let receiver: Receiver;
 
 beforeAll(async () => {
-  server = createServer((req, res) => {
-    const chunks: Buffer[] = [];
-    req.on("data", (c: Buffer) => chunks.push(c));
-    req.on("end", () => {
-      received.push({ headers: req.headers, body: Buffer.concat(chunks).toString("utf8") });
-      res.statusCode = script.shift() ?? 200;
-      res.end("ok");
-    });
-  });
-  await new Promise<void>((resolve) => server.listen(0, "127.0.0.1", resolve));
-  port = (server.address() as AddressInfo).port;
+  receiver = await startReceiver("127.0.0.2");
 });
 afterAll(async () => {
   await stopJobQueue();
-  await new Promise((resolve) => server.close(resolve));
+  await receiver.close();
 });
 
 const SECRET = "integration-webhook-secret";
@@ -47,14 +29,14 @@ function expectedSignature(body: string): string {
 }
 
 async function deliveriesOf(path: string) {
-  return received.filter((r) => (JSON.parse(r.body) as { family: { slug: string } }).family.slug === path);
+  return receiver.received.filter((r) => (JSON.parse(r.body) as { family: { slug: string } }).family.slug === path);
 }
 
 describe("webhooks on release", () => {
-  it("POST a JSON body signed with HMAC-SHA256 to the subscriber on 127.0.0.1", async () => {
+  it("POST a JSON body signed with HMAC-SHA256 to the subscriber", async () => {
     const { world, proposalId } = await acceptedProposal();
     const subscriber = await createPerson(["consumer"]);
-    await addWebhook(subscriber, { familySlug: world.familySlug, url: `http://127.0.0.1:${port}/hook`, secret: SECRET });
+    await addWebhook(subscriber, { familySlug: world.familySlug, url: receiver.url("/hook"), secret: SECRET });
     await releaseAccepted(world, proposalId, "1.1.0");
 
     const [hit] = await waitFor("the webhook POST", async () => {
@@ -79,8 +61,8 @@ describe("webhooks on release", () => {
   it("retry with backoff after the receiver first fails, and log every attempt", async () => {
     const { world, proposalId } = await acceptedProposal();
     const subscriber = await createPerson(["consumer"]);
-    const { id: subscriptionId } = await addWebhook(subscriber, { familySlug: world.familySlug, url: `http://127.0.0.1:${port}/flaky`, secret: SECRET });
-    script = [503];
+    const { id: subscriptionId } = await addWebhook(subscriber, { familySlug: world.familySlug, url: receiver.url("/flaky"), secret: SECRET });
+    receiver.script.push(503);
     await releaseAccepted(world, proposalId, "1.1.0");
 
     const delivery = await waitFor("a delivered retry", async () => {

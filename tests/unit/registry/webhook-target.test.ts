@@ -1,39 +1,56 @@
 import { describe, expect, it } from "vitest";
-import { isPrivateAddress, webhookTargetProblem } from "@/lib/registry/webhook-target";
+import { mayConnectTo, NOT_PUBLIC, parseNetworks, webhookTargetProblem } from "@/lib/registry/webhook-target";
+import { ISSUE_TARGETS, REFUSED_TARGETS } from "@/tests/support/refused-targets";
 
-// Ranges from RFC 1918 (private), RFC 1122 (loopback, "this network"), RFC 3927 (link-local), RFC 6598 (shared),
-// RFC 2544 (benchmarking), RFC 4193 (IPv6 unique local), RFC 4291 (IPv6 loopback, link-local, mapped, multicast).
-describe("private addresses", () => {
-  it("recognises private, loopback, link-local and multicast IPv4", () => {
-    for (const ip of ["10.1.2.3", "172.16.0.1", "172.31.255.255", "192.168.1.1", "127.0.0.1", "169.254.169.254", "100.64.0.1", "198.18.0.1", "0.0.0.0", "224.0.0.1"]) {
-      expect(isPrivateAddress(ip), ip).toBe(true);
-    }
-    for (const ip of ["8.8.8.8", "172.32.0.1", "100.128.0.1", "192.0.2.1", "203.0.113.9"]) expect(isPrivateAddress(ip), ip).toBe(false);
+const PUBLIC_TARGETS = ["8.8.8.8", "172.32.0.1", "100.128.0.1", "[2606:4700::1111]", "[::ffff:8.8.8.8]", "[64:ff9b::808:808]", "[2002:808:808::1]", "[2001:0:4136:e378:8000:63bf:f7f7:f7f7]"];
+
+const resolver = (map: Record<string, string[]>) => async (host: string) => {
+  if (!(host in map)) throw new Error("ENOTFOUND");
+  return map[host];
+};
+const dns = resolver({
+  "hooks.example.org": ["93.184.216.34"],
+  "sneaky.example.org": ["93.184.216.34", "10.0.0.5"],
+  "mapped.example.org": ["::ffff:7f00:1"],
+  "nat64.example.org": ["64:ff9b::5db8:d822"],
+});
+
+describe("webhook targets by URL", () => {
+  it.each([...ISSUE_TARGETS, ...REFUSED_TARGETS])("refuses http://%s/ (%s)", async (host) => {
+    expect(await webhookTargetProblem(`http://${host}:8080/hook`, dns, [])).toBe(NOT_PUBLIC);
   });
-  it("recognises IPv6 loopback, unique-local, link-local, multicast and mapped private IPv4", () => {
-    for (const ip of ["::1", "::", "fd12:3456::1", "fe80::1", "ff02::1", "::ffff:10.0.0.1"]) expect(isPrivateAddress(ip), ip).toBe(true);
-    for (const ip of ["2001:db8::1", "::ffff:8.8.8.8"]) expect(isPrivateAddress(ip), ip).toBe(false);
+
+  it("calls public addresses, also in their mapped, NAT64, 6to4 and Teredo forms", async () => {
+    for (const host of PUBLIC_TARGETS) expect(await webhookTargetProblem(`https://${host}/hook`, dns, []), host).toBeNull();
+  });
+
+  it("refuses a name when any of its addresses is not public, in any notation", async () => {
+    expect(await webhookTargetProblem("https://hooks.example.org/bandgate", dns, [])).toBeNull();
+    expect(await webhookTargetProblem("https://nat64.example.org/bandgate", dns, [])).toBeNull();
+    expect(await webhookTargetProblem("https://sneaky.example.org/x", dns, [])).toBe(NOT_PUBLIC);
+    expect(await webhookTargetProblem("https://mapped.example.org/x", dns, [])).toBe(NOT_PUBLIC);
+    expect(await webhookTargetProblem("https://nowhere.example.org/", dns, [])).toMatch(/could not be resolved/);
+    expect(await webhookTargetProblem("ftp://hooks.example.org/", dns, [])).toMatch(/http/);
   });
 });
 
-describe("webhook targets", () => {
-  const resolver = (map: Record<string, string[]>) => async (host: string) => {
-    if (!(host in map)) throw new Error("ENOTFOUND");
-    return map[host];
-  };
-  const dns = resolver({ "hooks.example.org": ["203.0.113.10"], "sneaky.example.org": ["203.0.113.10", "10.0.0.5"] });
+describe("networks the operator allows", () => {
+  const allowed = parseNetworks(" 127.0.0.2/32, fd00:1::/64 ");
 
-  it("calls public hosts and refuses names or literals that reach private networks", async () => {
-    expect(await webhookTargetProblem("https://hooks.example.org/bandgate", dns, false)).toBeNull();
-    expect(await webhookTargetProblem("https://sneaky.example.org/x", dns, false)).toMatch(/private/);
-    expect(await webhookTargetProblem("http://169.254.169.254/latest", dns, false)).toMatch(/private/);
-    expect(await webhookTargetProblem("http://[::1]:8080/", dns, false)).toMatch(/private/);
-    expect(await webhookTargetProblem("http://localhost:9000/", dns, false)).toMatch(/private/);
-    expect(await webhookTargetProblem("https://nowhere.example.org/", dns, false)).toMatch(/could not be resolved/);
-    expect(await webhookTargetProblem("ftp://hooks.example.org/", dns, false)).toMatch(/http/);
+  it("lets through exactly the listed networks, matching an IPv4-mapped address as its IPv4 address", async () => {
+    expect(await webhookTargetProblem("http://127.0.0.2:4567/hook", dns, allowed)).toBeNull();
+    expect(await webhookTargetProblem("http://[::ffff:127.0.0.2]:4567/hook", dns, allowed)).toBeNull();
+    expect(await webhookTargetProblem("http://[fd00:1::9]/hook", dns, allowed)).toBeNull();
+    for (const host of ["127.0.0.1", "127.0.0.3", "[::ffff:127.0.0.1]", "[::127.0.0.2]", "[64:ff9b::7f00:2]", "[fd00:2::1]", "10.0.0.1"]) {
+      expect(await webhookTargetProblem(`http://${host}:4567/hook`, dns, allowed), host).toBe(NOT_PUBLIC);
+    }
   });
 
-  it("lets local set-ups call loopback receivers when allowed", async () => {
-    expect(await webhookTargetProblem("http://127.0.0.1:4567/hook", dns, true)).toBeNull();
+  it("reads CIDR lists and refuses anything else", () => {
+    expect(parseNetworks("")).toEqual([]);
+    expect(mayConnectTo("127.0.0.2", parseNetworks("127.0.0.0/8"))).toBe(true);
+    expect(() => parseNetworks("127.0.0.1")).toThrow(/CIDR/);
+    expect(() => parseNetworks("localhost/8")).toThrow(/CIDR/);
+    expect(mayConnectTo("not an address", allowed)).toBe(false);
   });
 });

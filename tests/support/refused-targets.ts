@@ -1,0 +1,53 @@
+/**
+ * URL hosts of addresses no webhook may reach, each with what it stands for. ISSUE_TARGETS are the forms a probe
+ * found taken as public (they all reach 127.0.0.1, 10/8, 169.254/16 or site-local IPv6).
+ */
+export const ISSUE_TARGETS: [string, string][] = [
+  ["[::ffff:127.0.0.1]", "IPv4-mapped loopback, dotted"],
+  ["[::ffff:7f00:1]", "IPv4-mapped loopback, hex"],
+  ["[0:0:0:0:0:ffff:127.0.0.1]", "IPv4-mapped loopback, long form"],
+  ["[::ffff:169.254.169.254]", "IPv4-mapped link-local (cloud metadata)"],
+  ["[::ffff:10.0.0.1]", "IPv4-mapped private"],
+  ["[::127.0.0.1]", "IPv4-compatible loopback"],
+  ["[64:ff9b::7f00:1]", "NAT64 of loopback"],
+  ["[2002:7f00:1::]", "6to4 of loopback"],
+  ["[fec0::1]", "IPv6 site-local"],
+];
+
+export const REFUSED_TARGETS: [string, string][] = [
+  ["127.0.0.1", "loopback"],
+  ["0x7f.1", "loopback in hex shorthand"],
+  ["2130706433", "loopback as one number"],
+  ["0.0.0.0", "this network"],
+  ["10.1.2.3", "private"],
+  ["172.16.0.1", "private"],
+  ["192.168.1.1", "private"],
+  ["100.64.0.1", "shared address space"],
+  ["169.254.169.254", "link-local"],
+  ["192.0.0.9", "IETF protocol assignments"],
+  ["192.0.2.1", "documentation"],
+  ["198.51.100.7", "documentation"],
+  ["203.0.113.9", "documentation"],
+  ["198.18.0.1", "benchmarking"],
+  ["192.88.99.1", "6to4 relay anycast"],
+  ["224.0.0.1", "multicast"],
+  ["240.0.0.1", "reserved"],
+  ["255.255.255.255", "broadcast"],
+  ["[::]", "unspecified"],
+  ["[::1]", "IPv6 loopback"],
+  ["[fd12:3456::1]", "unique local"],
+  ["[fe80::1]", "IPv6 link-local"],
+  ["[ff02::1]", "IPv6 multicast"],
+  ["[100::1]", "discard-only"],
+  ["[2001:db8::1]", "IPv6 documentation"],
+  ["[3fff::1]", "IPv6 documentation (2024)"],
+  ["[2001:2::1]", "IPv6 benchmarking"],
+  ["[2001:10::1]", "ORCHID"],
+  ["[2001:20::1]", "ORCHIDv2"],
+  ["[5f00::1]", "segment routing"],
+  ["[::ffff:0:7f00:1]", "IPv4-translated"],
+  ["[64:ff9b:1::808:808]", "local-use NAT64"],
+  ["[2001:0:4136:e378:8000:63bf:f5ff:fffe]", "Teredo with a private client (10.0.0.1)"],
+  ["[2001:0:a00:1:8000:63bf:f7f7:f7f7]", "Teredo with a private server (10.0.0.1)"],
+  ["[1::1]", "unallocated IPv6"],
+];
