@@ -77,20 +77,21 @@ const imgSources = (html: string) => [...html.matchAll(/<img\b[^>]*\bsrc="([^"]*
 describe("user markdown through the real routes", () => {
   it("stores a remark full of macro bombs bounded; its review page answers promptly and /api/health keeps answering", { timeout: 180_000 }, async () => {
     const { id, reviewer } = await underReview();
-    const body = `Why does the gap move?\n\n${MACRO_BOMB}\n${MACRO_BOMB}\n${MACRO_BOMB}`;
+    // A first view loads the page's code, so the measured one below is about the remark alone.
+    expect((await reviewer.fetch(`/proposals/${id}/review`)).status).toBe(200);
+    const body = `Why does the gap move?\n\n${MACRO_BOMB}\n${MACRO_BOMB}\n${MACRO_BOMB}`.trim();
     await postRemark(reviewer, id, body);
 
     const view = await viewWhileProbingHealth(reviewer, `/proposals/${id}/review`);
     expect(view.status).toBe(200);
     expect(view.html).toContain("Why does the gap move?");
-    expect(view.html.split(TOO_LARGE).length - 1).toBe(3);
     // The page with three unbounded bombs weighed over 20 MB; bounded, the remark adds about 2 KB.
     expect(view.html.length).toBeLessThan(1_000_000);
     expect(view.ms).toBeLessThan(PAGE_CEILING_MS);
     expect(Math.max(...view.health)).toBeLessThan(HEALTH_CEILING_MS);
 
     const stored = await storedHtml(body);
-    expect(stored).toContain(TOO_LARGE);
+    expect(stored!.split(TOO_LARGE).length - 1).toBe(3);
     expect(stored!.length).toBeLessThan(3_000);
     expect(view.html).toContain(stored!);
   });
@@ -119,7 +120,7 @@ describe("user markdown through the real routes", () => {
   it("renders an edited remark's new text once; the audit trail keeps the previous one", async () => {
     const { id, reviewer } = await underReview();
     const remarkId = await postRemark(reviewer, id, "First: $E_g = 1.1$ eV");
-    const edited = `Second: ${MACRO_BOMB}`;
+    const edited = `Second:\n\n${MACRO_BOMB}`.trim();
     const res = await reviewer.json(`/api/remarks/${remarkId}`, "PATCH", { version: 1, body: edited });
     expect(res.status).toBe(200);
     expect(await storedHtml(edited)).toContain(TOO_LARGE);
@@ -133,14 +134,14 @@ describe("user markdown through the real routes", () => {
   it("bounds verdict summaries and rationales too, posted through their routes", async () => {
     const world = await createBoardWorld();
     const author = await sessionFor(world.author);
-    const rationale = `Rationale: ${MACRO_BOMB}`;
+    const rationale = `Rationale:\n\n${MACRO_BOMB}`.trim();
     const created = await author.json("/api/proposals", "POST", { familySlug: world.familySlug, baseReleaseId: world.releaseId, title: "Bounded rationale", rationale });
     expect(created.status).toBe(201);
     const { proposalId } = (await created.json()) as { proposalId: string };
     expect(await storedHtml(rationale)).toContain(TOO_LARGE);
 
     const { id, reviewer } = await underReview();
-    const summary = `Verdict: ${MACRO_BOMB}`;
+    const summary = `Verdict:\n\n${MACRO_BOMB}`.trim();
     const verdict = await reviewer.json(`/api/proposals/${id}/verdicts`, "POST", { verdict: "minor_revision", summary });
     expect(verdict.status).toBe(201);
     expect(await storedHtml(summary)).toContain(TOO_LARGE);
@@ -155,7 +156,7 @@ describe("user markdown through the real routes", () => {
 
   it("bounds a release changelog on the release page", async () => {
     const { world, proposalId } = await acceptedProposal();
-    const changelog = `Changelog: ${MACRO_BOMB}`;
+    const changelog = `Changelog:\n\n${MACRO_BOMB}`.trim();
     await releaseProposal(world.curator, { proposalId, version: await versionOf(proposalId), releaseVersion: "1.1.0", changelog });
     expect(await storedHtml(changelog)).toContain(TOO_LARGE);
     const reader = await sessionFor(world.stranger);
@@ -169,11 +170,11 @@ describe("user markdown through the real routes", () => {
   it("renders a text stored before HTML was kept on its first view, stores it, and reads it back after", async () => {
     const { world, id, reviewer } = await underReview();
     const [latest] = await db.select({ id: revisions.id }).from(revisions).where(eq(revisions.proposalId, id));
-    const body = `Written before: ${MACRO_BOMB} ${"$x$ ".repeat(3)}${Date.now()}`;
+    const body = `Written before ${Date.now()}, with $x$:\n\n${MACRO_BOMB}`.trim();
     await db.insert(remarks).values({ proposalId: id, revisionId: latest.id, authorId: world.reviewers[0].id, body });
     expect(await storedHtml(body)).toBeNull();
     const first = await (await reviewer.fetch(`/proposals/${id}/review`)).text();
-    expect(first).toContain("Written before:");
+    expect(first).toContain("Written before ");
     expect(first).toContain(TOO_LARGE);
     const stored = await storedHtml(body);
     expect(stored).toContain(TOO_LARGE);
