@@ -12,6 +12,7 @@ import { getFamilyIdentity, lockRelease } from "@/lib/registry/queries";
 import type { DeprecateInput, ReleaseInput, WithdrawInput } from "@/lib/registry/schemas";
 import { compareSemver, parseSemver } from "@/lib/registry/semver";
 import { documentHash, physicsHash } from "@/lib/tb/canonical";
+import { storeMarkdownHtml } from "./markdown-html";
 import { prepareRelease } from "./release-draft";
 import { moveProposal } from "./service";
 import { getFamilyCuratorIds } from "./queries";
@@ -56,6 +57,7 @@ export async function releaseProposal(actor: SessionUser, input: ReleaseInput): 
     return { releaseId: release.id, familySlug: prepared.familySlug, version: input.releaseVersion, eventId };
   });
   await enqueueReleaseEvent(result.eventId);
+  await storeMarkdownHtml(input.changelog);
   return { releaseId: result.releaseId, familySlug: result.familySlug, version: result.version };
 }
 

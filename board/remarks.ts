@@ -5,6 +5,7 @@ import { proposals, remarks } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError } from "@/lib/errors";
+import { storeMarkdownHtml } from "./markdown-html";
 import { notifyMentions } from "./notify";
 import { getAssignedReviewerIds, getFamilyCuratorIds, getLatestRevision } from "./queries";
 import { decideRemarkAction, isDiscussionOpen, mayFlagBlocking, mayWriteRemark, mentionedHandles, nextStatus, type RemarkContext } from "./remark-rules";
@@ -57,6 +58,7 @@ export async function createRemark(actor: SessionUser, input: CreateRemarkInput)
     });
     return { remarkId: row.id };
   });
+  await storeMarkdownHtml(input.body);
   await notifyMentions(input.proposalId, mentionedHandles(input.body), actor, input.body);
   return result;
 }
@@ -82,7 +84,7 @@ export async function actOnRemark(actor: SessionUser, input: RemarkActionInput):
   });
 }
 
-/** Only its writer edits a remark; the previous text stays in the audit trail. */
+/** Only its writer edits a remark; the previous text stays in the audit trail, and the stored HTML follows the new one. */
 export async function editRemark(actor: SessionUser, input: EditRemarkInput): Promise<void> {
   await db.transaction(async (tx) => {
     const remark = await lockRemark(tx, input.remarkId, input.version);
@@ -91,4 +93,5 @@ export async function editRemark(actor: SessionUser, input: EditRemarkInput): Pr
     await tx.update(remarks).set({ body: input.body, version: remark.version + 1, updatedAt: new Date() }).where(eq(remarks.id, remark.id));
     await recordAudit(tx, { actorId: actor.id, action: "remark.edited", subjectType: "proposal", subjectId: remark.proposalId, before: { remarkId: remark.id, body: remark.body }, after: { body: input.body } });
   });
+  await storeMarkdownHtml(input.body);
 }

@@ -11,6 +11,7 @@ import type { AcceptanceCriterionInput } from "@/lib/tb/analysis/acceptance";
 import type { ModelDocument } from "@/lib/tb/document";
 import { loadProposalFacts } from "./facts";
 import { notifyMove, notifyReviewerAssigned, notifyVerdict } from "./notify";
+import { storeMarkdownHtml } from "./markdown-html";
 import { getBoardCard, findFamilyBySlug, getLatestRevision, getRelease, getUserRoles, lockProposal } from "./queries";
 import { deriveRevisionFacts, parseDocument } from "./revision-facts";
 import { decideAssignReviewer, decideManageReviewers, decideMove, decideRevise, decideWaiveChecks, type MoveDecision, type RuleActor as RuleActorLike } from "./rules";
@@ -56,7 +57,7 @@ async function baseDocumentOf(tx: Tx, baseReleaseId: string | null): Promise<Mod
 
 export async function createProposal(actor: SessionUser, input: CreateProposalInput, document?: unknown): Promise<{ proposalId: string }> {
   if (!hasAnyRole(actor.roles, ["author"])) throw new AppError("forbidden:role", "Only authors may start proposals.");
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const family = await findFamilyBySlug(tx, input.familySlug);
     if (!family) throw new AppError("not-found:family", "That model family does not exist.", { familySlug: ["Unknown family."] });
     const base = input.baseReleaseId ? await getRelease(tx, input.baseReleaseId) : null;
@@ -82,6 +83,8 @@ export async function createProposal(actor: SessionUser, input: CreateProposalIn
     });
     return { proposalId: proposal.id };
   });
+  await storeMarkdownHtml(input.rationale);
+  return result;
 }
 
 export async function saveRevision(actor: SessionUser, input: SaveRevisionInput): Promise<{ revision: number; version: number }> {
@@ -133,7 +136,7 @@ export async function appendRevision(
 }
 
 export async function editProposalText(actor: SessionUser, input: EditTextInput): Promise<{ version: number }> {
-  return db.transaction(async (tx) => {
+  const result = await db.transaction(async (tx) => {
     const proposal = await lockFresh(tx, input.proposalId, input.version);
     enforce(decideRevise(actor, proposal));
     await bump(tx, proposal.id, proposal.version, { title: input.title, rationale: input.rationale });
@@ -147,6 +150,8 @@ export async function editProposalText(actor: SessionUser, input: EditTextInput)
     });
     return { version: proposal.version + 1 };
   });
+  await storeMarkdownHtml(input.rationale);
+  return result;
 }
 
 export async function moveProposal(actor: SessionUser, input: MoveInput, opts: { viaRelease?: boolean; tx?: Tx } = {}): Promise<{ version: number }> {
@@ -244,6 +249,7 @@ export async function giveVerdict(actor: SessionUser, input: VerdictInput): Prom
     await recordAudit(tx, { actorId: actor.id, action: "proposal.verdict", subjectType: "proposal", subjectId: proposal.id, after: { verdict: input.verdict, revision: latest!.number } });
     return { verdictId: row.id };
   });
+  await storeMarkdownHtml(input.summary);
   await notifyVerdict(input.proposalId, actor.name, input.verdict);
   return result;
 }

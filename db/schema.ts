@@ -337,3 +337,4 @@ export type Remark = typeof remarks.$inferSelect;
 
 export * from "./schema-registry";
 export * from "./schema-fits";
+export * from "./schema-markdown";

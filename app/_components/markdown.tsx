@@ -1,19 +1,14 @@
-import ReactMarkdown from "react-markdown";
-import rehypeKatex from "rehype-katex";
-import remarkMath from "remark-math";
-
-const SAFE_PROTOCOL = /^(https?:|mailto:|#|\/)/i;
+import type { SanitizedHtml } from "@/lib/markdown/render";
 
 /**
- * Markdown with math ($…$ inline, $$ on their own lines for display). Raw HTML is never rendered (react-markdown
- * skips it), and links other than http(s), mailto and in-app ones lose their target.
+ * User markdown as HTML that lib/markdown rendered and sanitized (stored when the text was written): math by KaTeX
+ * within bounds, raw HTML as text, links http(s), mailto or in-app, images from this origin only.
  */
-export function Markdown({ text }: { text: string }) {
+export function Markdown({ html }: { html: SanitizedHtml }) {
   return (
-    <div className="markdown space-y-2 leading-relaxed [&_a]:text-copper-deep [&_a]:underline [&_code]:num [&_code]:rounded [&_code]:bg-paper-deep [&_code]:px-1 [&_ol]:list-decimal [&_ol]:pl-6 [&_ul]:list-disc [&_ul]:pl-6">
-      <ReactMarkdown remarkPlugins={[remarkMath]} rehypePlugins={[rehypeKatex]} urlTransform={(url) => (SAFE_PROTOCOL.test(url) ? url : "")}>
-        {text}
-      </ReactMarkdown>
-    </div>
+    <div
+      className="markdown space-y-2 leading-relaxed [&_a]:text-copper-deep [&_a]:underline [&_code]:num [&_code]:rounded [&_code]:bg-paper-deep [&_code]:px-1 [&_ol]:list-decimal [&_ol]:pl-6 [&_ul]:list-disc [&_ul]:pl-6"
+      dangerouslySetInnerHTML={{ __html: html }}
+    />
   );
 }

@@ -1,6 +1,7 @@
 import { expect, test } from "@playwright/test";
 import { E2E_PEOPLE, E2E_SECOND_REVIEWER } from "./fixtures/people";
 import { openReviewAs, ReviewPage } from "./pages/review-page";
+import { MACRO_BOMB, TOO_LARGE } from "../support/user-math";
 
 const TITLE = "E2E review";
 
@@ -10,6 +11,11 @@ test("a blocking remark with math and a major revision hold the gate until the a
   const reviewer = new ReviewPage(await openReviewAs(browser, E2E_PEOPLE.reviewer.email, TITLE));
   await expect(reviewer.page.getByRole("img", { name: /Band structure along/ })).toBeVisible();
   await expect(reviewer.page.locator("#param-shell\\/A-A\\/1\\/sp_sigma")).toBeVisible();
+  // The preview renders in the browser with the server's bounds.
+  const { preview, back } = await reviewer.previewRemark(`Gap $E_g$, and a bomb:\n\n${MACRO_BOMB}`);
+  await expect(preview.locator(".katex").first()).toBeVisible();
+  await expect(preview.locator(".math-too-large")).toContainText(TOO_LARGE);
+  await back();
   await reviewer.writeRemark("Why does $E_g$ move here?\n\n$$\n\\Delta E \\approx \\frac{\\partial E}{\\partial p}\\,\\Delta p\n$$\n", true);
   const remark = reviewer.remark("Why does");
   await expect(remark.locator(".katex").first()).toBeVisible();

@@ -22,6 +22,14 @@ export class ReviewPage {
     return this.page.getByRole("form", { name: "Write a remark" });
   }
 
+  /** Opens the preview of a remark not yet posted; returns where it shows, and a way back to the text box. */
+  async previewRemark(text: string) {
+    const form = this.remarkForm();
+    await form.getByRole("textbox", { name: "Remark" }).fill(text);
+    await form.getByRole("button", { name: "Preview" }).click();
+    return { preview: form.getByTestId("remark-preview"), back: () => form.getByRole("button", { name: "Edit" }).click() };
+  }
+
   async writeRemark(text: string, blocking: boolean) {
     const form = this.remarkForm();
     await form.getByRole("textbox", { name: "Remark" }).fill(text);

@@ -5,6 +5,7 @@ import { BandPlot, type BandSeries } from "@/app/_components/band-plot";
 import { Markdown } from "@/app/_components/markdown";
 import { SafetyNote } from "@/app/_components/safety-note";
 import { compareBandsOnPath } from "@/board/band-comparison";
+import { loadMarkdownHtml } from "@/board/markdown-html";
 import { getProposalView } from "@/board/proposal-view";
 import { listReviewers } from "@/board/queries";
 import { VERDICT_LABEL } from "@/board/stages";
@@ -33,6 +34,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
   const view = /^[0-9a-f-]{36}$/i.test(id) ? await getProposalView(id, user) : null;
   if (!view) notFound();
   const { proposal, latest, latestDocument, baseDocument, may } = view;
+  const htmlOf = await loadMarkdownHtml([proposal.rationale, ...view.verdicts.map((v) => v.summary)]);
   const candidates = may.manageReviewers ? (await listReviewers()).filter((r) => r.id !== proposal.authorId) : [];
   const comparison = latestDocument
     ? compareBandsOnPath(latestDocument, baseDocument, view.references.map((r) => ({ name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } })))
@@ -61,7 +63,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
         <div className="min-w-0 space-y-8">
           {proposal.rationale ? (
             <Section title="Rationale">
-              <Markdown text={proposal.rationale} />
+              <Markdown html={htmlOf(proposal.rationale)} />
             </Section>
           ) : null}
         </div>
@@ -97,7 +99,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
                     <span className="font-semibold">{VERDICT_LABEL[v.verdict]}</span> by {v.reviewerName} on r{v.revision}
                     {v.fresh ? "" : <span className="ml-1 rounded bg-paper-deep px-1 text-xs">stale: the physics changed since</span>}
                   </div>
-                  <Markdown text={v.summary} />
+                  <Markdown html={htmlOf(v.summary)} />
                 </li>
               ))}
               {view.verdicts.length === 0 ? <li className="text-ink-soft">No verdicts yet.</li> : null}

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Markdown } from "@/app/_components/markdown";
 import { SafetyNote } from "@/app/_components/safety-note";
+import { loadMarkdownHtml } from "@/board/markdown-html";
 import { getProposalView } from "@/board/proposal-view";
 import { getRevisionDocument, listRemarks } from "@/board/queries";
 import { anchorFromQuery, isDiscussionOpen, mayFlagBlocking, mayWriteRemark } from "@/board/remark-rules";
@@ -60,7 +61,10 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const metrics = metricsTables.get(`${inputsKey}|${metricsSettings.alignment}|${window ?? ""}`, () =>
     buildMetrics(latestDocument, baseDocument, references[0] ?? null, metricsSettings),
   );
-  const remarks = await listRemarks(id);
+  const remarkRows = await listRemarks(id);
+  const htmlOf = await loadMarkdownHtml([proposal.rationale, ...view.verdicts.map((v) => v.summary), ...remarkRows.map((r) => r.body)]);
+  const remarks = remarkRows.map((r) => ({ ...r, bodyHtml: htmlOf(r.body) }));
+  const verdicts = view.verdicts.map((v) => ({ ...v, summaryHtml: htmlOf(v.summary) }));
   const toRevision = view.revisions.find((r) => `r${r.number}` === to.value) ?? null;
   const ctx = { authorId: proposal.authorId, assignedReviewerIds: view.facts.assignedReviewerIds, familyCuratorIds: view.facts.familyCuratorIds };
   const discussionOpen = isDiscussionOpen(proposal.stage);
@@ -83,7 +87,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
         <div className="min-w-0 space-y-10">
           {proposal.rationale ? (
             <Section title="Rationale">
-              <Markdown text={proposal.rationale} />
+              <Markdown html={htmlOf(proposal.rationale)} />
             </Section>
           ) : null}
           <Section title="What changed">
@@ -117,7 +121,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
             <StagePanel proposalId={proposal.id} version={proposal.version} hints={view.hints} />
           </Section>
           <Section title="Verdicts">
-            <VerdictsPanel proposalId={proposal.id} verdicts={view.verdicts} required={view.facts.requiredAccepts} fresh={view.facts.freshAccepts} mayGive={view.may.giveVerdict} />
+            <VerdictsPanel proposalId={proposal.id} verdicts={verdicts} required={view.facts.requiredAccepts} fresh={view.facts.freshAccepts} mayGive={view.may.giveVerdict} />
           </Section>
           <div id="remarks">
             <Section title="Remarks">

@@ -1,10 +1,11 @@
 "use client";
 
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { ActionForm } from "@/app/_components/action-form";
 import { inputClass, primaryButtonClass } from "@/app/_components/form-parts";
 import { Markdown } from "@/app/_components/markdown";
 import { describeAnchor, REMARK_MAX, type RemarkAnchor } from "@/board/remark-rules";
+import { renderUserMarkdown } from "@/lib/markdown/render";
 import { createRemarkAction } from "./actions";
 
 /** A new remark (or a reply): markdown with $inline$ and $$display$$ math, @mentions by e-mail name, optional blocking flag. */
@@ -12,6 +13,8 @@ export function RemarkForm({ proposalId, anchor, parentId, mayBlock, clearAnchor
   const [text, setText] = useState("");
   const [preview, setPreview] = useState(false);
   const reply = Boolean(parentId);
+  // The same bounded renderer the server stores remarks with, run here only while the preview is open.
+  const previewHtml = useMemo(() => (preview ? renderUserMarkdown(text || "_nothing yet_").html : null), [preview, text]);
   return (
     <ActionForm action={createRemarkAction} label={reply ? "Reply" : "Write a remark"} className={reply ? "mt-2" : "rounded-lg border border-rule bg-card p-4"}>
       {({ pending, fieldErrors }) => (
@@ -31,9 +34,9 @@ export function RemarkForm({ proposalId, anchor, parentId, mayBlock, clearAnchor
           ) : null}
           <label className="block text-sm">
             <span className={reply ? "sr-only" : "mb-1 block font-semibold"}>{reply ? "Reply" : "Remark"}</span>
-            {preview ? (
+            {previewHtml !== null ? (
               <div className="min-h-20 rounded-md border border-rule bg-white p-2" data-testid="remark-preview">
-                <Markdown text={text || "_nothing yet_"} />
+                <Markdown html={previewHtml} />
               </div>
             ) : (
               <textarea

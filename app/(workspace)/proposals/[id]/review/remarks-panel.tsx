@@ -1,10 +1,11 @@
 import { Markdown } from "@/app/_components/markdown";
+import type { SanitizedHtml } from "@/lib/markdown/render";
 import { decideRemarkAction, describeAnchor, remarkAnchorSchema, type RemarkAction, type RemarkContext, type RemarkParty } from "@/board/remark-rules";
 import type { listRemarks } from "@/board/queries";
 import { RemarkControls } from "./remark-controls";
 import { RemarkForm } from "./remark-form";
 
-type RemarkRow = Awaited<ReturnType<typeof listRemarks>>[number];
+type RemarkRow = Awaited<ReturnType<typeof listRemarks>>[number] & { bodyHtml: SanitizedHtml };
 
 const STATUS = { open: "○ open", addressed: "◐ addressed", resolved: "● resolved" } as const;
 const ACTIONS: RemarkAction[] = ["address", "resolve", "reopen"];
@@ -20,7 +21,7 @@ function RemarkItem({ r, viewer, ctx, latestRevision, open }: { r: RemarkRow; vi
         <span>{r.createdAt.toISOString().slice(0, 16).replace("T", " ")} UTC</span>
         {r.updatedAt.getTime() - r.createdAt.getTime() > 1000 && r.status === "open" ? <span>(edited)</span> : null}
       </div>
-      <Markdown text={r.body} />
+      <Markdown html={r.bodyHtml} />
       <RemarkControls remarkId={r.id} version={r.version} actions={actions} editable={open && r.writerId === viewer.id} body={r.body} />
     </div>
   );

@@ -5,6 +5,7 @@ import { BandPlot } from "@/app/_components/band-plot";
 import { FormMessage } from "@/app/_components/form-parts";
 import { Markdown } from "@/app/_components/markdown";
 import { SafetyNote } from "@/app/_components/safety-note";
+import { loadMarkdownHtml } from "@/board/markdown-html";
 import { requirePageUser } from "@/lib/auth/guard";
 import { StatusBadge } from "../../status-badge";
 import { CurationForms } from "./curation-forms";
@@ -36,6 +37,7 @@ export default async function ReleasePage({ params }: { params: Promise<{ slug: 
   const view = await getReleasePageView(user, slug, version);
   if (!view) notFound();
   const { family, release, model } = view;
+  const htmlOf = await loadMarkdownHtml([release.changelog]);
   return (
     <>
       <Link href={`/registry/${family.slug}`} className="text-sm text-copper-deep underline">
@@ -84,7 +86,7 @@ export default async function ReleasePage({ params }: { params: Promise<{ slug: 
         <SafetyNote validity={model.ok ? model.view.validity : undefined} />
         <div className="grid gap-8 lg:grid-cols-2">
           <Block title="Changelog">
-            <Markdown text={release.changelog} />
+            <Markdown html={htmlOf(release.changelog)} />
           </Block>
           <div className="space-y-8">
             <Block title="Downloads">
