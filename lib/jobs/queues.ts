@@ -6,6 +6,7 @@ export const QUEUES = {
   releaseEvent: "release-event",
   webhookDelivery: "webhook-delivery",
   registryMail: "registry-mail",
+  passwordResetMail: "password-reset-mail",
   rateWindowCleanup: "rate-window-cleanup",
   fitRun: "fit-run",
   /** Fit jobs that used up their retries (a worker died each time) land here and are marked failed. */
@@ -22,6 +23,13 @@ export interface ReleaseEventJob {
 export interface WebhookDeliveryJob {
   deliveryId: string;
 }
+/** A password-reset request as the web process took it; the worker looks the address up. */
+export interface PasswordResetMailJob {
+  email: string;
+  /** The client address (lib/auth/client-ip.ts); null when unknown: then only the per-account cap applies. */
+  requestedIp: string | null;
+}
+
 export interface RegistryMailJob {
   eventId: string;
   userId: string;
@@ -32,6 +40,7 @@ export async function ensureQueues(boss: PgBoss): Promise<void> {
   await boss.createQueue(QUEUES.releaseEvent, { name: QUEUES.releaseEvent, retryLimit: 5, retryDelay: 5, retryBackoff: true });
   await boss.createQueue(QUEUES.webhookDelivery, { name: QUEUES.webhookDelivery, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true });
   await boss.createQueue(QUEUES.registryMail, { name: QUEUES.registryMail, retryLimit: 5, retryDelay: 30, retryBackoff: true });
+  await boss.createQueue(QUEUES.passwordResetMail, { name: QUEUES.passwordResetMail, retryLimit: 3, retryDelay: 10, retryBackoff: true });
   await boss.createQueue(QUEUES.rateWindowCleanup, { name: QUEUES.rateWindowCleanup, policy: "singleton" });
   await boss.createQueue(QUEUES.fitRunDead, { name: QUEUES.fitRunDead, retryLimit: 3, retryDelay: 5 });
   await boss.createQueue(QUEUES.fitRun, { name: QUEUES.fitRun, deadLetter: QUEUES.fitRunDead, ...fitJobLimits() });

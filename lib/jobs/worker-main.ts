@@ -2,12 +2,13 @@ import { availableParallelism } from "node:os";
 import PgBoss from "pg-boss";
 import { lt } from "drizzle-orm";
 import { closeDb, db } from "@/db/client";
-import { apiRateWindows } from "@/db/schema";
+import { apiRateWindows, signInCounters } from "@/db/schema";
 import { serverEnv } from "@/lib/env";
 import { deliverWebhook } from "./deliver-webhook";
 import { fanOutReleaseEvent } from "./fan-out";
 import { failFit } from "@/lib/fits/worker-side";
-import { ensureQueues, QUEUES, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
+import { mailPasswordReset } from "@/lib/accounts/password-reset-mail";
+import { ensureQueues, QUEUES, type FitRunJob, type PasswordResetMailJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
 import { runFitJob } from "./run-fit";
 import { giveBackStalledFits } from "./stalled-fits";
 import { requeueUnsentReleaseEvents } from "./unsent-release-events";
@@ -32,8 +33,11 @@ await boss.work<WebhookDeliveryJob>(QUEUES.webhookDelivery, { ...polling, batchS
   deliverWebhook(job.data.deliveryId, job.retryCount >= job.retryLimit),
 );
 await boss.work<RegistryMailJob>(QUEUES.registryMail, polling, async ([job]) => sendRegistryMail(job.data.eventId, job.data.userId));
+await boss.work<PasswordResetMailJob>(QUEUES.passwordResetMail, polling, async ([job]) => mailPasswordReset(job.data));
 await boss.work(QUEUES.rateWindowCleanup, async () => {
-  await db.delete(apiRateWindows).where(lt(apiRateWindows.windowStart, new Date(Date.now() - 60 * 60 * 1000)));
+  const hourAgo = new Date(Date.now() - 60 * 60 * 1000);
+  await db.delete(apiRateWindows).where(lt(apiRateWindows.windowStart, hourAgo));
+  await db.delete(signInCounters).where(lt(signInCounters.windowStart, hourAgo));
 });
 await boss.schedule(QUEUES.rateWindowCleanup, "17 * * * *");
 
