@@ -7,12 +7,12 @@ import { serverEnv } from "@/lib/env";
 import { deliverWebhook } from "./deliver-webhook";
 import { fanOutReleaseEvent } from "./fan-out";
 import { failFit } from "@/lib/fits/worker-side";
-import { mailPasswordReset } from "@/lib/accounts/password-reset-mail";
 import { ensureQueues, QUEUES, type FitRunJob, type PasswordResetMailJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
 import { runFitJob } from "./run-fit";
 import { giveBackStalledFits } from "./stalled-fits";
 import { requeueUnsentReleaseEvents } from "./unsent-release-events";
 import { sendRegistryMail } from "./send-registry-mail";
+import { RESET_MAIL_BATCH, sendPasswordResetMails } from "./send-reset-mail";
 import { jobSettings } from "./settings";
 
 /**
@@ -33,7 +33,9 @@ await boss.work<WebhookDeliveryJob>(QUEUES.webhookDelivery, { ...polling, batchS
   deliverWebhook(job.data.deliveryId, job.retryCount >= job.retryLimit),
 );
 await boss.work<RegistryMailJob>(QUEUES.registryMail, polling, async ([job]) => sendRegistryMail(job.data.eventId, job.data.userId));
-await boss.work<PasswordResetMailJob>(QUEUES.passwordResetMail, polling, async ([job]) => mailPasswordReset(job.data));
+await boss.work<PasswordResetMailJob>(QUEUES.passwordResetMail, { ...polling, batchSize: RESET_MAIL_BATCH }, async (jobs) =>
+  sendPasswordResetMails(boss, jobs),
+);
 await boss.work(QUEUES.rateWindowCleanup, async () => {
   const hourAgo = new Date(Date.now() - 60 * 60 * 1000);
   await db.delete(apiRateWindows).where(lt(apiRateWindows.windowStart, hourAgo));

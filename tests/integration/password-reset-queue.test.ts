@@ -39,8 +39,9 @@ describe("a password-reset request", () => {
 
     const known = await requestReset(person.email);
     const stranger = await requestReset(unknown);
-    expect(known).toEqual({ ok: true, data: { email: person.email } });
-    expect(stranger).toEqual({ ok: true, data: { email: unknown } });
+    expect(known).toMatchObject({ ok: true, data: { email: person.email } });
+    expect(stranger).toMatchObject({ ok: true, data: { email: unknown } });
+    expect(JSON.stringify(known).replace(person.email, "…")).toBe(JSON.stringify(stranger).replace(unknown, "…"));
 
     const [knownJobs, unknownJobs] = [await resetJobsFor(person.email), await resetJobsFor(unknown)];
     expect(knownJobs).toHaveLength(1);

@@ -24,7 +24,8 @@ function tally(codes: (string | null)[]) {
   };
 }
 
-describe("sign-in throttling through the sign-in endpoint", () => {
+// Each test runs dozens of bcrypt checks (and one starts a second server): generous limits for a busy machine.
+describe("sign-in throttling through the sign-in endpoint", { timeout: 120_000 }, () => {
   it(`checks at most ${MAX_FAILURES_PER_ACCOUNT} of 20 simultaneous wrong passwords for one account, then refuses even the right one`, async () => {
     const person = await createPerson(["author"]);
     const client = new HttpSession(appUrl(), { localAddress: freshLoopback() });
