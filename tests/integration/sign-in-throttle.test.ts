@@ -5,13 +5,12 @@ import { closeDb, db } from "@/db/client";
 import { signInAttempts } from "@/db/schema";
 import { MAX_FAILURES_PER_ACCOUNT, MAX_FAILURES_PER_IP } from "@/lib/auth/rate-limit";
 import { startApp } from "../support/app-server";
+import { freshLoopbackAddress } from "../support/bound-fetch";
 import { appUrl, HttpSession } from "../support/http-session";
 import { createPerson } from "../support/people";
 
 afterAll(closeDb);
 
-/** A loopback address of this run alone, so no other test (or an earlier run) has counted attempts from it. */
-const freshLoopback = () => `127.${randomInt(1, 255)}.${randomInt(0, 256)}.${randomInt(1, 255)}`;
 const freshDocumentationAddress = () => `2001:db8::${randomInt(1, 0xffff).toString(16)}:${randomInt(1, 0xffff).toString(16)}`;
 const spoofed = () => `203.0.113.${randomInt(1, 255)}`;
 const nobody = () => `nobody-${randomUUID().slice(0, 8)}@test.invalid`;
@@ -28,7 +27,7 @@ function tally(codes: (string | null)[]) {
 describe("sign-in throttling through the sign-in endpoint", { timeout: 120_000 }, () => {
   it(`checks at most ${MAX_FAILURES_PER_ACCOUNT} of 20 simultaneous wrong passwords for one account, then refuses even the right one`, async () => {
     const person = await createPerson(["author"]);
-    const client = new HttpSession(appUrl(), { localAddress: freshLoopback() });
+    const client = new HttpSession(appUrl(), { localAddress: freshLoopbackAddress() });
     await client.fetch("/api/auth/csrf"); // one CSRF cookie for all the attempts below
 
     const codes = await Promise.all(Array.from({ length: 20 }, () => client.signIn(person.email, "wrong-password")));
@@ -37,11 +36,11 @@ describe("sign-in throttling through the sign-in endpoint", { timeout: 120_000 }
     // Only checked attempts are recorded: the refused ones never reached the password check.
     expect(await db.select().from(signInAttempts).where(eq(signInAttempts.email, person.email))).toHaveLength(MAX_FAILURES_PER_ACCOUNT);
     expect(await client.signIn(person.email, person.password)).toBe("signin-throttled");
-    expect(await new HttpSession(appUrl(), { localAddress: freshLoopback() }).signIn(person.email, person.password)).toBe("signin-throttled");
+    expect(await new HttpSession(appUrl(), { localAddress: freshLoopbackAddress() }).signIn(person.email, person.password)).toBe("signin-throttled");
   });
 
   it("counts a client by its own address when it writes X-Forwarded-For itself (no proxy configured)", async () => {
-    const address = freshLoopback();
+    const address = freshLoopbackAddress();
     const client = new HttpSession(appUrl(), { localAddress: address });
     await client.fetch("/api/auth/csrf");
 
@@ -51,7 +50,7 @@ describe("sign-in throttling through the sign-in endpoint", { timeout: 120_000 }
 
     const person = await createPerson(["author"]);
     expect(await client.signIn(person.email, person.password, `${spoofed()}, ${spoofed()}`)).toBe("signin-throttled");
-    expect(await new HttpSession(appUrl(), { localAddress: freshLoopback() }).signIn(person.email, person.password)).toBeNull();
+    expect(await new HttpSession(appUrl(), { localAddress: freshLoopbackAddress() }).signIn(person.email, person.password)).toBeNull();
   });
 
   it("behind one trusted proxy, counts the address the proxy appended, not the client-written left part", async () => {

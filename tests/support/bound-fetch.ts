@@ -1,4 +1,13 @@
+import { randomInt } from "node:crypto";
 import { request } from "node:http";
+
+/**
+ * A loopback address of this test alone, so no other test (or an earlier run) has counted sign-in attempts or reset
+ * mails from it.
+ */
+export function freshLoopbackAddress(): string {
+  return `127.${randomInt(1, 255)}.${randomInt(0, 256)}.${randomInt(1, 255)}`;
+}
 
 /**
  * fetch over plain HTTP from a chosen loopback address (127.0.0.0/8 all reach this machine), so a test can be a

@@ -82,11 +82,11 @@ export class HttpSession {
    * Calls a server action the way a form with useActionState does (POST to the page with the action's id), and
    * returns the action's result as the client would see it.
    */
-  async action<T = unknown>(pagePath: string, file: string, exportName: string, fields: Record<string, string>): Promise<T> {
+  async action<T = unknown>(pagePath: string, file: string, exportName: string, fields: Record<string, string>, headers: Record<string, string> = {}): Promise<T> {
     const { body, contentType } = serverActionBody(fields);
     const res = await this.fetch(pagePath, {
       method: "POST",
-      headers: { "next-action": serverActionId(file, exportName), "content-type": contentType, origin: this.base, accept: "text/x-component" },
+      headers: { ...headers, "next-action": serverActionId(file, exportName), "content-type": contentType, origin: this.base, accept: "text/x-component" },
       body,
     });
     const text = await res.text();
