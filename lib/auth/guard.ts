@@ -11,10 +11,9 @@ import type { SessionUser } from "./session-user";
 /**
  * The one place that answers "who is asking, and may they?". Route handlers and server actions use
  * requireUser/requireRole (coded errors → 401/403); pages use requirePageUser (sign-in redirect or 403 page).
- */
-/**
- * The session's account, loaded fresh (one primary-key lookup, done once per request: React's cache dedupes the layout
- * and page calls of one render). A token whose session version is not the account's current one — from before a
+ *
+ * The session's account is loaded fresh (one primary-key lookup, once per request: React's cache shares it between the
+ * layout and the page of one render). A token whose session version is not the account's current one — from before a
  * password change or reset, a role change, a deactivation or a sign-out — counts as no session.
  */
 export const currentUser = cache(async (): Promise<SessionUser | null> => {
