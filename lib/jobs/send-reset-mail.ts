@@ -6,11 +6,13 @@ import { QUEUES, type PasswordResetMailJob } from "./queues";
 export const RESET_MAIL_BATCH = 10;
 
 /**
- * Handles a batch of reset requests one at a time, oldest first (the caps count the links sent before). A request
- * whose mail fails is handed back on its own for a retry; pg-boss then completes the others.
+ * Handles a batch of reset requests one at a time, oldest first (the caps count the links sent before; a fetched
+ * batch comes in no particular order). A request whose mail fails is handed back on its own for a retry; pg-boss then
+ * completes the others.
  */
-export async function sendPasswordResetMails(boss: PgBoss, jobs: PgBoss.Job<PasswordResetMailJob>[]): Promise<void> {
-  for (const job of jobs) {
+export async function sendPasswordResetMails(boss: PgBoss, jobs: PgBoss.JobWithMetadata<PasswordResetMailJob>[]): Promise<void> {
+  const oldestFirst = [...jobs].sort((a, b) => a.createdOn.getTime() - b.createdOn.getTime());
+  for (const job of oldestFirst) {
     try {
       await mailPasswordReset(job.data);
     } catch (err) {

@@ -33,7 +33,7 @@ await boss.work<WebhookDeliveryJob>(QUEUES.webhookDelivery, { ...polling, batchS
   deliverWebhook(job.data.deliveryId, job.retryCount >= job.retryLimit),
 );
 await boss.work<RegistryMailJob>(QUEUES.registryMail, polling, async ([job]) => sendRegistryMail(job.data.eventId, job.data.userId));
-await boss.work<PasswordResetMailJob>(QUEUES.passwordResetMail, { ...polling, batchSize: RESET_MAIL_BATCH }, async (jobs) =>
+await boss.work<PasswordResetMailJob>(QUEUES.passwordResetMail, { ...polling, batchSize: RESET_MAIL_BATCH, includeMetadata: true }, async (jobs) =>
   sendPasswordResetMails(boss, jobs),
 );
 await boss.work(QUEUES.rateWindowCleanup, async () => {
