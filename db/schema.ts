@@ -32,6 +32,8 @@ export const users = pgTable(
     roles: roleEnum("roles").array().notNull().default(sql`'{}'::role[]`),
     active: boolean("active").notNull().default(true),
     version: integer("version").notNull().default(1),
+    /** Copied into each session token at sign-in; bumping it ends every earlier session (lib/auth/guard.ts). */
+    sessionVersion: integer("session_version").notNull().default(1),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -108,6 +110,21 @@ export const signInAttempts = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index("sign_in_attempts_email_idx").on(t.email, t.createdAt), index("sign_in_attempts_ip_idx").on(t.ip, t.createdAt)],
+);
+
+/**
+ * Sign-in attempts per account ("account", e-mail) and per client address ("address") in a window that opens with
+ * the first attempt; reserved atomically before a password is checked (lib/accounts/sign-in-counters.ts).
+ */
+export const signInCounters = pgTable(
+  "sign_in_counters",
+  {
+    scope: text("scope").notNull(),
+    key: text("key").notNull(),
+    windowStart: timestamp("window_start", { withTimezone: true }).notNull().defaultNow(),
+    attempts: integer("attempts").notNull().default(0),
+  },
+  (t) => [primaryKey({ columns: [t.scope, t.key] }), index("sign_in_counters_window_idx").on(t.windowStart)],
 );
 
 /** Messages stored by the local mail catcher (dev and tests only). */

@@ -15,6 +15,8 @@ const envSchema = z.object({
   SMTP_PASS: z.string().optional(),
   MAIL_FROM: z.string().min(3).default("Bandgate <bandgate@localhost>"),
   BANDGATE_ENV: z.enum(["production", "development", "test"]).default("production"),
+  /** Reverse proxies in front of the web server that append to X-Forwarded-For; 0 = clients connect directly. */
+  TRUSTED_PROXY_COUNT: z.coerce.number().int().min(0).max(10).default(0),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

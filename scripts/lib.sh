@@ -111,7 +111,7 @@ ensure_auth_secret() {
 build_if_needed() {
   local stamp=.next/bandgate-source-hash
   local hash
-  hash=$( { git ls-files -co --exclude-standard -- app board db lib mail public proxy.ts next.config.ts \
+  hash=$( { git ls-files -co --exclude-standard -- app board db lib mail public proxy.ts instrumentation.ts next.config.ts \
       postcss.config.mjs tsconfig.json tsconfig.build.json package-lock.json 2>/dev/null | sort | xargs -r sha1sum; } | sha1sum | cut -c1-40)
   if [ -f .next/BUILD_ID ] && [ -f "$stamp" ] && [ "$(cat "$stamp")" = "$hash" ]; then
     log "build is up to date"

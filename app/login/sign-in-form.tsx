@@ -5,9 +5,10 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Field, FormMessage, inputClass, primaryButtonClass } from "@/app/_components/form-parts";
-import { safeCallbackPath, signInErrorMessage } from "@/lib/auth/sign-in-messages";
+import { signInErrorMessage } from "@/lib/auth/sign-in-messages";
 
-export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string | null; initialError: string | null }) {
+/** `returnTo` is already a same-site path (the page checks it with safeReturnPath). */
+export function SignInForm({ returnTo, initialError }: { returnTo: string; initialError: string | null }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(signInErrorMessage(initialError));
   const [pending, setPending] = useState(false);
@@ -27,7 +28,7 @@ export function SignInForm({ callbackUrl, initialError }: { callbackUrl: string 
       setError(signInErrorMessage(result?.error ?? "signin-failed"));
       return;
     }
-    router.replace(safeCallbackPath(callbackUrl));
+    router.replace(returnTo);
     router.refresh();
   }
 

@@ -1,8 +1,7 @@
 import "server-only";
-import { and, count, desc, eq, gt, isNull } from "drizzle-orm";
+import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db, type Database, type Tx } from "@/db/client";
 import { auditEvents, caughtMail, invitations, passwordResetTokens, signInAttempts, users } from "@/db/schema";
-import { SIGN_IN_WINDOW_MINUTES, type FailureCounts } from "@/lib/auth/rate-limit";
 
 type Conn = Database | Tx;
 
@@ -25,9 +24,18 @@ export async function getUserById(conn: Conn, id: string) {
   return row ?? null;
 }
 
+/** Who a session belongs to, with the session version its token must carry (one primary-key lookup). */
+export async function getSessionUser(id: string) {
+  const [row] = await db
+    .select({ id: users.id, email: users.email, name: users.name, roles: users.roles, active: users.active, sessionVersion: users.sessionVersion })
+    .from(users)
+    .where(eq(users.id, id));
+  return row ?? null;
+}
+
 export async function getCredentialsByEmail(email: string) {
   const [row] = await db
-    .select({ id: users.id, passwordHash: users.passwordHash, active: users.active })
+    .select({ id: users.id, passwordHash: users.passwordHash, active: users.active, sessionVersion: users.sessionVersion })
     .from(users)
     .where(eq(users.email, email));
   return row ?? null;
@@ -59,16 +67,6 @@ export function listOpenInvitations() {
 export async function findResetTokenByHash(conn: Conn, tokenHash: string) {
   const [row] = await conn.select().from(passwordResetTokens).where(eq(passwordResetTokens.tokenHash, tokenHash)).for("update");
   return row ?? null;
-}
-
-export async function countRecentFailures(email: string, ip: string): Promise<FailureCounts> {
-  const since = new Date(Date.now() - SIGN_IN_WINDOW_MINUTES * 60_000);
-  const failed = and(eq(signInAttempts.succeeded, false), gt(signInAttempts.createdAt, since));
-  const [[account], [byIp]] = await Promise.all([
-    db.select({ n: count() }).from(signInAttempts).where(and(failed, eq(signInAttempts.email, email))),
-    db.select({ n: count() }).from(signInAttempts).where(and(failed, eq(signInAttempts.ip, ip))),
-  ]);
-  return { account: account?.n ?? 0, ip: byIp?.n ?? 0 };
 }
 
 export async function recordSignInAttempt(email: string, ip: string, succeeded: boolean): Promise<void> {

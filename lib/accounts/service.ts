@@ -1,25 +1,24 @@
-import { UNKNOWN_IP } from "@/lib/auth/client-ip";
 import "server-only";
-import { and, count, eq, gt, isNull } from "drizzle-orm";
+import { and, eq, isNull, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { invitations, passwordResetTokens, users } from "@/db/schema";
 import { recordAudit } from "@/lib/audit";
+import { UNKNOWN_IP } from "@/lib/auth/client-ip";
+import { enqueuePasswordResetMail } from "@/lib/jobs/boss";
 import { hashPassword, hashToken, newSecretToken, verifyPassword } from "@/lib/auth/secrets";
 import { normaliseRoles } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { serverEnv } from "@/lib/env";
 import { AppError } from "@/lib/errors";
 import { sendMail } from "@/mail/send";
-import { invitationMail, passwordResetMail } from "@/mail/templates";
+import { invitationMail } from "@/mail/templates";
 import { assertAdmin } from "./policy";
 import { emailTaken, findInvitationByHash, findResetTokenByHash, getPasswordHash, getUserById } from "./queries";
 import type { AcceptInvitationInput, ChangePasswordInput, ChangeRolesInput, InviteInput, ResetPasswordInput, SetActiveInput } from "./schemas";
 
 const INVITATION_DAYS = 7;
-const RESET_MINUTES = 60;
-const MAX_RESETS_PER_WINDOW = 3;
-/** Reset mails an hour from one address, across all accounts (common practice: a few per person behind one NAT). */
-export const MAX_RESETS_PER_IP = 10;
+/** Set on every change that must end earlier sessions: their tokens carry the old number (lib/auth/guard.ts). */
+const NEXT_SESSION_VERSION = sql<number>`${users.sessionVersion} + 1`;
 
 function appLink(path: string): string {
   return new URL(path, serverEnv().APP_URL).toString();
@@ -103,15 +102,20 @@ async function lockUserForChange(tx: Parameters<Parameters<typeof db.transaction
   return row;
 }
 
-export async function changeRoles(actor: SessionUser, input: ChangeRolesInput): Promise<void> {
+/** Ends the person's earlier sessions; returns their new session version (to renew the actor's own session). */
+export async function changeRoles(actor: SessionUser, input: ChangeRolesInput): Promise<{ sessionVersion: number }> {
   assertAdmin(actor);
   const roles = normaliseRoles(input.roles);
   if (input.userId === actor.id && !roles.includes("admin")) {
     throw new AppError("invalid:self-lockout", "You cannot remove your own admin role; ask another admin.");
   }
-  await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const row = await lockUserForChange(tx, input.userId, input.version);
-    await tx.update(users).set({ roles, version: row.version + 1, updatedAt: new Date() }).where(eq(users.id, row.id));
+    const [changed] = await tx
+      .update(users)
+      .set({ roles, version: row.version + 1, sessionVersion: NEXT_SESSION_VERSION, updatedAt: new Date() })
+      .where(eq(users.id, row.id))
+      .returning({ sessionVersion: users.sessionVersion });
     await recordAudit(tx, {
       actorId: actor.id,
       action: "user.roles-changed",
@@ -120,6 +124,7 @@ export async function changeRoles(actor: SessionUser, input: ChangeRolesInput): 
       before: { roles: row.roles },
       after: { roles },
     });
+    return changed;
   });
 }
 
@@ -130,7 +135,10 @@ export async function setActive(actor: SessionUser, input: SetActiveInput): Prom
   }
   await db.transaction(async (tx) => {
     const row = await lockUserForChange(tx, input.userId, input.version);
-    await tx.update(users).set({ active: input.active, version: row.version + 1, updatedAt: new Date() }).where(eq(users.id, row.id));
+    await tx
+      .update(users)
+      .set({ active: input.active, version: row.version + 1, sessionVersion: NEXT_SESSION_VERSION, updatedAt: new Date() })
+      .where(eq(users.id, row.id));
     await recordAudit(tx, {
       actorId: actor.id,
       action: input.active ? "user.reactivated" : "user.deactivated",
@@ -143,38 +151,12 @@ export async function setActive(actor: SessionUser, input: SetActiveInput): Prom
 }
 
 /**
- * Always answers the same way, so the form does not reveal which addresses have accounts. `ip` is the requester's
- * address as the proxy reports it; requests from an unknown address are capped per account only.
+ * The request only validates (the caller's schema), records and enqueues: the same statements for every address, so
+ * neither the answer nor its timing says which addresses have accounts. The worker looks the account up, applies the
+ * caps and mails the link (mailPasswordReset). `ip` is the client address from clientIp.
  */
 export async function requestPasswordReset(email: string, ip: string): Promise<void> {
-  await db.transaction(async (tx) => {
-    const [user] = await tx.select({ id: users.id, name: users.name, active: users.active }).from(users).where(eq(users.email, email));
-    if (!user || !user.active) return;
-    const since = new Date(Date.now() - RESET_MINUTES * 60_000);
-    const [{ recent }] = await tx
-      .select({ recent: count() })
-      .from(passwordResetTokens)
-      .where(and(eq(passwordResetTokens.userId, user.id), gt(passwordResetTokens.createdAt, since)));
-    // Same answer as ever, but no more mail: stops a stranger from flooding someone's inbox with reset links.
-    if (recent >= MAX_RESETS_PER_WINDOW) return;
-    if (ip !== UNKNOWN_IP) {
-      const [{ fromHere }] = await tx
-        .select({ fromHere: count() })
-        .from(passwordResetTokens)
-        .where(and(eq(passwordResetTokens.requestedIp, ip), gt(passwordResetTokens.createdAt, since)));
-      // …and from one address to many accounts (a script walking a list of e-mails).
-      if (fromHere >= MAX_RESETS_PER_IP) return;
-    }
-    await tx
-      .update(passwordResetTokens)
-      .set({ usedAt: new Date() })
-      .where(and(eq(passwordResetTokens.userId, user.id), isNull(passwordResetTokens.usedAt)));
-    const { token, hash } = newSecretToken();
-    const expiresAt = new Date(Date.now() + RESET_MINUTES * 60_000);
-    await tx.insert(passwordResetTokens).values({ userId: user.id, tokenHash: hash, expiresAt, requestedIp: ip === UNKNOWN_IP ? null : ip });
-    await recordAudit(tx, { actorId: null, action: "password.reset-requested", subjectType: "user", subjectId: user.id });
-    await sendMail(passwordResetMail({ to: email, name: user.name, link: appLink(`/reset-password/${token}`), expiresAt }));
-  });
+  await enqueuePasswordResetMail({ email, requestedIp: ip === UNKNOWN_IP ? null : ip });
 }
 
 export async function resetPassword(input: ResetPasswordInput): Promise<void> {
@@ -184,20 +166,26 @@ export async function resetPassword(input: ResetPasswordInput): Promise<void> {
     assertUsable(row, row?.usedAt, "password reset");
     const user = await getUserById(tx, row!.userId);
     if (!user || !user.active) throw new AppError("forbidden:inactive", "This account is deactivated.");
-    await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, user.id));
+    await tx.update(users).set({ passwordHash, sessionVersion: NEXT_SESSION_VERSION, updatedAt: new Date() }).where(eq(users.id, user.id));
     await tx.update(passwordResetTokens).set({ usedAt: new Date() }).where(eq(passwordResetTokens.id, row!.id));
     await recordAudit(tx, { actorId: user.id, action: "password.reset", subjectType: "user", subjectId: user.id });
   });
 }
 
-export async function changeOwnPassword(actor: SessionUser, input: ChangePasswordInput): Promise<void> {
+/** Ends every session of the actor, this one included; returns the new session version to renew this one with. */
+export async function changeOwnPassword(actor: SessionUser, input: ChangePasswordInput): Promise<{ sessionVersion: number }> {
   const current = await getPasswordHash(db, actor.id);
   if (!current || !(await verifyPassword(input.current, current))) {
     throw new AppError("invalid:password", "Your current password is not right.", { current: ["Not right."] });
   }
   const passwordHash = await hashPassword(input.password);
-  await db.transaction(async (tx) => {
-    await tx.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, actor.id));
+  return db.transaction(async (tx) => {
+    const [changed] = await tx
+      .update(users)
+      .set({ passwordHash, sessionVersion: NEXT_SESSION_VERSION, updatedAt: new Date() })
+      .where(eq(users.id, actor.id))
+      .returning({ sessionVersion: users.sessionVersion });
     await recordAudit(tx, { actorId: actor.id, action: "password.changed", subjectType: "user", subjectId: actor.id });
+    return changed;
   });
 }

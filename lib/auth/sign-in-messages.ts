@@ -9,9 +9,3 @@ export function signInErrorMessage(code: string | null | undefined): string | nu
   if (code === SIGN_IN_FAILED || code === "CredentialsSignin") return "That e-mail and password do not match an active account.";
   return "Sign-in failed. Try again.";
 }
-
-/** Only same-site paths may be used as the place to return to after signing in. */
-export function safeCallbackPath(raw: string | null | undefined): string {
-  if (!raw || !raw.startsWith("/") || raw.startsWith("//") || raw.startsWith("/\\")) return "/";
-  return raw;
-}

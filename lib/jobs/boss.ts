@@ -1,7 +1,7 @@
 import "server-only";
 import PgBoss from "pg-boss";
 import { serverEnv } from "@/lib/env";
-import { ensureQueues, fitJobLimits, JOB_SCHEMA, QUEUES, type FitRunJob, type ReleaseEventJob } from "./queues";
+import { ensureQueues, fitJobLimits, JOB_SCHEMA, QUEUES, type FitRunJob, type PasswordResetMailJob, type ReleaseEventJob } from "./queues";
 
 const cache = globalThis as unknown as { bandgateBoss?: Promise<PgBoss> };
 
@@ -40,6 +40,12 @@ export async function enqueueReleaseEvent(eventId: string): Promise<void> {
 export async function enqueueFit(fitId: string): Promise<void> {
   const boss = await jobQueue();
   await boss.send(QUEUES.fitRun, { fitId } satisfies FitRunJob, { id: fitId, ...fitJobLimits() });
+}
+
+/** Hands a password-reset request to the worker, which decides whether anything is mailed. */
+export async function enqueuePasswordResetMail(job: PasswordResetMailJob): Promise<void> {
+  const boss = await jobQueue();
+  await boss.send(QUEUES.passwordResetMail, job);
 }
 
 /** Stops the sending instance (scripts and tests that exit). */

@@ -14,6 +14,7 @@ export const QUEUES = {
   releaseEvent: "release-event",
   webhookDelivery: "webhook-delivery",
   registryMail: "registry-mail",
+  passwordResetMail: "password-reset-mail",
   rateWindowCleanup: "rate-window-cleanup",
   fitRun: "fit-run",
   /** Fit jobs that came back to the queue too often (FIT_JOB_RETURNS) land here and are marked failed. */
@@ -30,6 +31,13 @@ export interface ReleaseEventJob {
 export interface WebhookDeliveryJob {
   deliveryId: string;
 }
+/** A password-reset request as the web process took it; the worker looks the address up. */
+export interface PasswordResetMailJob {
+  email: string;
+  /** The client address (lib/auth/client-ip.ts); null when unknown: then only the per-account cap applies. */
+  requestedIp: string | null;
+}
+
 export interface RegistryMailJob {
   eventId: string;
   userId: string;
@@ -40,6 +48,7 @@ export async function ensureQueues(boss: PgBoss): Promise<void> {
   await boss.createQueue(QUEUES.releaseEvent, { name: QUEUES.releaseEvent, retryLimit: 5, retryDelay: 5, retryBackoff: true });
   await boss.createQueue(QUEUES.webhookDelivery, { name: QUEUES.webhookDelivery, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true });
   await boss.createQueue(QUEUES.registryMail, { name: QUEUES.registryMail, retryLimit: 5, retryDelay: 30, retryBackoff: true });
+  await boss.createQueue(QUEUES.passwordResetMail, { name: QUEUES.passwordResetMail, retryLimit: 3, retryDelay: 10, retryBackoff: true });
   await boss.createQueue(QUEUES.rateWindowCleanup, { name: QUEUES.rateWindowCleanup, policy: "singleton" });
   await boss.createQueue(QUEUES.fitRunDead, { name: QUEUES.fitRunDead, retryLimit: 3, retryDelay: 5 });
   await boss.createQueue(QUEUES.fitRun, { name: QUEUES.fitRun, deadLetter: QUEUES.fitRunDead, ...fitJobLimits() });

@@ -2,16 +2,17 @@ import { availableParallelism } from "node:os";
 import PgBoss from "pg-boss";
 import { lt } from "drizzle-orm";
 import { closeDb, db } from "@/db/client";
-import { apiRateWindows } from "@/db/schema";
+import { apiRateWindows, signInCounters } from "@/db/schema";
 import { serverEnv } from "@/lib/env";
 import { deliverWebhook } from "./deliver-webhook";
 import { fanOutReleaseEvent } from "./fan-out";
 import { failFit } from "@/lib/fits/worker-side";
-import { ensureQueues, FIT_JOB_RETURNS, JOB_SCHEMA, QUEUES, WORKER_APPLICATION_NAME, type FitRunJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
+import { ensureQueues, FIT_JOB_RETURNS, JOB_SCHEMA, QUEUES, WORKER_APPLICATION_NAME, type FitRunJob, type PasswordResetMailJob, type RegistryMailJob, type ReleaseEventJob, type WebhookDeliveryJob } from "./queues";
 import { runFitJob } from "./run-fit";
 import { giveBackStalledFits } from "./stalled-fits";
 import { requeueUnsentReleaseEvents } from "./unsent-release-events";
 import { sendRegistryMail } from "./send-registry-mail";
+import { RESET_MAIL_BATCH, sendPasswordResetMails } from "./send-reset-mail";
 import { jobSettings } from "./settings";
 
 /**
@@ -34,8 +35,13 @@ await boss.work<WebhookDeliveryJob>(QUEUES.webhookDelivery, { ...polling, batchS
   deliverWebhook(job.data.deliveryId, job.retryCount >= job.retryLimit),
 );
 await boss.work<RegistryMailJob>(QUEUES.registryMail, polling, async ([job]) => sendRegistryMail(job.data.eventId, job.data.userId));
+await boss.work<PasswordResetMailJob>(QUEUES.passwordResetMail, { ...polling, batchSize: RESET_MAIL_BATCH, includeMetadata: true }, async (jobs) =>
+  sendPasswordResetMails(boss, jobs),
+);
 await boss.work(QUEUES.rateWindowCleanup, async () => {
-  await db.delete(apiRateWindows).where(lt(apiRateWindows.windowStart, new Date(Date.now() - 60 * 60 * 1000)));
+  const hourAgo = new Date(Date.now() - 60 * 60 * 1000);
+  await db.delete(apiRateWindows).where(lt(apiRateWindows.windowStart, hourAgo));
+  await db.delete(signInCounters).where(lt(signInCounters.windowStart, hourAgo));
 });
 await boss.schedule(QUEUES.rateWindowCleanup, "17 * * * *");
 

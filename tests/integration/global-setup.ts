@@ -1,7 +1,7 @@
 import { spawn, type ChildProcess } from "node:child_process";
-import { createServer } from "node:net";
 import pg from "pg";
 import { createMailCatcher, listen } from "@/mail/fake-smtp-server";
+import { freePort, waitForReady } from "../support/app-server";
 
 /**
  * Integration tests run against the real PostgreSQL named by DATABASE_URL (scripts/test.sh creates a fresh
@@ -9,30 +9,6 @@ import { createMailCatcher, listen } from "@/mail/fake-smtp-server";
  */
 let app: ChildProcess | undefined;
 let catcher: ReturnType<typeof createMailCatcher> | undefined;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const srv = createServer();
-    srv.listen(0, "127.0.0.1", () => {
-      const address = srv.address();
-      srv.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
-    });
-  });
-}
-
-async function waitForReady(url: string, seconds: number): Promise<void> {
-  const deadline = Date.now() + seconds * 1000;
-  while (Date.now() < deadline) {
-    try {
-      const res = await fetch(url);
-      if (res.ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`the app did not become ready at ${url}`);
-}
 
 export async function setup(): Promise<void> {
   const url = process.env.DATABASE_URL ?? "";

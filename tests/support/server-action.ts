@@ -35,6 +35,14 @@ function multipart(fields: [string, string | UploadedFile][]): { body: string; c
   return { body: `${parts.join("")}--${boundary}--\r\n`, contentType: `multipart/form-data; boundary=${boundary}` };
 }
 
+/** The multipart body React sends for `action(previousState, formData)`: the form's fields under the prefix "_1_",
+ * then field "0" with the argument list (last, so the fields have arrived when it is read). */
+export function serverActionBody(fields: Record<string, string | UploadedFile>): { body: string; contentType: string } {
+  const entries: [string, string | UploadedFile][] = Object.entries(fields).map(([k, v]) => [`_1_${k}`, v]);
+  entries.push(["0", JSON.stringify([null, "$K1"])]);
+  return multipart(entries);
+}
+
 /**
  * Calls a `(prevState, formData)` server action the way React's client does: the form's fields carry the prefix
  * "_1_" (the form is part 1), then field "0" holds the arguments `[null, "$K1"]`.
@@ -46,9 +54,7 @@ export async function callServerAction(
   fields: Record<string, string | UploadedFile>,
   headers: Record<string, string> = {},
 ): Promise<{ status: number; text: string }> {
-  const entries: [string, string | UploadedFile][] = Object.entries(fields).map(([k, v]) => [`_1_${k}`, v]);
-  entries.push(["0", JSON.stringify([null, "$K1"])]);
-  const { body, contentType } = multipart(entries);
+  const { body, contentType } = serverActionBody(fields);
   const res = await session.fetch(page, {
     method: "POST",
     headers: { accept: "text/x-component", "next-action": actionId, "content-type": contentType, ...headers },

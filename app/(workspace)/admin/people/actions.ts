@@ -4,6 +4,7 @@ import { revalidatePath } from "next/cache";
 import { changeRolesInput, inviteInput, setActiveInput } from "@/lib/accounts/schemas";
 import { changeRoles, inviteUser, setActive } from "@/lib/accounts/service";
 import { defineAction } from "@/lib/action";
+import { renewOwnSession } from "@/lib/auth/session-cookie";
 
 const admins = { roles: ["admin" as const] };
 
@@ -23,7 +24,8 @@ export const changeRolesAction = defineAction({
   schema: changeRolesInput,
   message: "Roles saved.",
   run: async (input, user) => {
-    await changeRoles(user!, input);
+    const { sessionVersion } = await changeRoles(user!, input);
+    if (input.userId === user!.id) await renewOwnSession(sessionVersion);
     revalidatePath("/admin/people");
     return null;
   },
