@@ -1,8 +1,13 @@
 import type { NextConfig } from "next";
+import { ACTION_BODY_MAX_BYTES } from "./lib/size-limits";
 
 const nextConfig: NextConfig = {
   serverExternalPackages: ["pg", "pg-boss", "nodemailer", "smtp-server", "mailparser"],
-  experimental: { authInterrupts: true },
+  experimental: {
+    authInterrupts: true,
+    // Form posts carry at most a model document (lib/size-limits.ts); the default 1 MB would cut larger ones off.
+    serverActions: { bodySizeLimit: ACTION_BODY_MAX_BYTES },
+  },
   poweredByHeader: false,
   // The build checks the app's own code; `npm test` type-checks everything, tests included (tsc --noEmit).
   typescript: { tsconfigPath: "tsconfig.build.json" },

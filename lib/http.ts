@@ -1,19 +1,21 @@
 import "server-only";
 import { z } from "zod";
 import { AppError, fieldErrorsOf, toErrorResponse } from "./errors";
+import { JSON_BODY_LIMIT, readBodyText, type BodyLimit } from "./http-body";
 
-/** The JSON body, unvalidated (for services that validate it themselves); bad JSON is a 400. */
-export async function readJsonBody(request: Request): Promise<unknown> {
+/** The JSON body, unvalidated (for services that validate it themselves); too large is a 413, bad JSON a 400. */
+export async function readJsonBody(request: Request, limit: BodyLimit = JSON_BODY_LIMIT): Promise<unknown> {
+  const text = await readBodyText(request, limit);
   try {
-    return await request.json();
+    return JSON.parse(text);
   } catch {
     throw new AppError("invalid:json", "The request body is not valid JSON.");
   }
 }
 
-/** Parse a JSON request body with zod; bad JSON or a bad shape is a 400 with field errors. */
-export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
-  const raw = await readJsonBody(request);
+/** Parse a JSON request body with zod; too large is a 413, bad JSON or a bad shape a 400 with field errors. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, limit: BodyLimit = JSON_BODY_LIMIT): Promise<z.output<S>> {
+  const raw = await readJsonBody(request, limit);
   const parsed = schema.safeParse(raw);
   if (!parsed.success) throw new AppError("invalid:input", "The request body has problems.", fieldErrorsOf(parsed.error));
   return parsed.data;

@@ -4,7 +4,8 @@ import { notFound } from "next/navigation";
 import { BandPlot, type BandSeries } from "@/app/_components/band-plot";
 import { Markdown } from "@/app/_components/markdown";
 import { SafetyNote } from "@/app/_components/safety-note";
-import { compareBandsOnPath } from "@/board/band-comparison";
+import { runEngine } from "@/lib/engine-pool/engine";
+import { serverEnv } from "@/lib/env";
 import { getProposalView } from "@/board/proposal-view";
 import { listReviewers } from "@/board/queries";
 import { VERDICT_LABEL } from "@/board/stages";
@@ -35,7 +36,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
   const { proposal, latest, latestDocument, baseDocument, may } = view;
   const candidates = may.manageReviewers ? (await listReviewers()).filter((r) => r.id !== proposal.authorId) : [];
   const comparison = latestDocument
-    ? compareBandsOnPath(latestDocument, baseDocument, view.references.map((r) => ({ name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } })))
+    ? await runEngine("bandComparison", latestDocument, baseDocument, view.references.map((r) => ({ name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } })))
     : null;
   const series: BandSeries[] = comparison
     ? [
@@ -109,7 +110,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
       <div className="mt-8 space-y-8">
         {may.revise && latest ? (
           <Section title="Parameters">
-            <RevisionEditor proposalId={proposal.id} version={proposal.version} document={latest.document} baseDocument={baseDocument} />
+            <RevisionEditor proposalId={proposal.id} version={proposal.version} document={latest.document} baseDocument={baseDocument} basisLimit={serverEnv().MODEL_BASIS_LIMIT} />
           </Section>
         ) : (
           <>
