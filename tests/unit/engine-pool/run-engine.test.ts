@@ -9,7 +9,8 @@ afterAll(closeEnginePool);
 
 const chain = parseModelDocument(JSON.parse(readFileSync("db/seed/models/demo-sp-chain.json", "utf8")));
 
-describe("engine computations on the pool's threads", () => {
+// The first task starts a thread that loads the engine's TypeScript source (tsx): seconds on a busy machine.
+describe("engine computations on the pool's threads", { timeout: 60_000 }, () => {
   it("gives exactly what the engine gives on the caller's thread", async () => {
     const changed = setParameters(chain, { "shell/A-A/1/ss_sigma": -1.5 });
     expect(await runEngine("revisionFacts", changed, chain, [])).toEqual(deriveRevisionFacts(changed, chain, []));

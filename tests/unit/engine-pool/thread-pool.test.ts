@@ -22,12 +22,14 @@ function pool(options: { threads?: number; queueLimit?: number; timeoutMs?: numb
 }
 const run = (p: ThreadPool, task: string, ...args: unknown[]) => p.run(task as EngineRequest["task"], args);
 const codeOf = (err: unknown) => (err instanceof AppError ? err.code : String(err));
+/** Long enough for a thread to start on a machine whose cores are busy with other work. */
+const OVERRUN_MS = 3000;
 
 afterEach(async () => {
   await Promise.all(pools.splice(0).map((p) => p.close()));
 });
 
-describe("engine thread pool", () => {
+describe("engine thread pool", { timeout: 30_000 }, () => {
   it("answers each task on a thread, in order, and reports a task's own error by name and message", async () => {
     const p = pool({ threads: 2 });
     const answers = await Promise.all([run(p, "echo", 1), run(p, "echo", 2), run(p, "echo", 3)]);
@@ -50,7 +52,7 @@ describe("engine thread pool", () => {
   });
 
   it("stops a task that overruns with engine-timeout, replaces its thread, and runs what waited", async () => {
-    const p = pool({ threads: 1, timeoutMs: 300 });
+    const p = pool({ threads: 1, timeoutMs: OVERRUN_MS });
     const first = (await run(p, "echo")) as { threadId: number };
     const stuck = run(p, "forever");
     const next = run(p, "echo", "after");
@@ -68,7 +70,8 @@ describe("engine thread pool", () => {
   });
 
   it("refuses a task that waits longer than the timeout for a thread", async () => {
-    const p = pool({ threads: 1, timeoutMs: 300 });
+    const p = pool({ threads: 1, timeoutMs: OVERRUN_MS });
+    await run(p, "echo"); // the thread is up: what follows is timed from a running thread
     const stuck = run(p, "forever").catch(codeOf);
     const nextStuck = run(p, "forever").catch(codeOf); // takes the thread when the first is stopped
     await expect(run(p, "echo")).rejects.toMatchObject({ code: ENGINE_BUSY });
