@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { withoutNul } from "@/lib/pg-text";
+import { DOCUMENT_MAX_BYTES, DOCUMENT_TOO_LARGE, utf8Length } from "@/lib/size-limits";
 import { STAGES, VERDICTS } from "./stages";
 
 /** Inputs of the board's use-cases, shared by server actions, route handlers and forms. */
@@ -24,18 +25,27 @@ export type WaiveInput = z.infer<typeof waiveInput>;
 const title = z.string({ error: "Give the proposal a title." }).trim().min(3, { error: "Use at least 3 characters." }).max(200, { error: "Use at most 200 characters." });
 const rationale = z.string().max(20_000, { error: "Use at most 20,000 characters." }).default("");
 
-/** The document travels as JSON text from forms; it is validated by the engine, not here. */
-const documentText = z
-  .string({ error: "The model document is missing." })
-  .max(2_000_000, { error: "The model document is larger than 2 MB." })
-  .transform((text, ctx) => {
-    try {
-      return JSON.parse(text) as unknown;
-    } catch {
-      ctx.addIssue({ code: "custom", message: "The model document is not valid JSON." });
-      return z.NEVER;
-    }
-  });
+/**
+ * The document: JSON text from forms (its size is checked before it is parsed), or an object from the JSON API.
+ * Its content is validated by the engine, not here.
+ */
+const documentInput = z.unknown().transform((value, ctx) => {
+  if (typeof value !== "string") {
+    if (typeof value === "object" && value !== null && !Array.isArray(value)) return value as Record<string, unknown>;
+    ctx.addIssue({ code: "custom", message: "The model document is missing." });
+    return z.NEVER;
+  }
+  if (utf8Length(value) > DOCUMENT_MAX_BYTES) {
+    ctx.addIssue({ code: "custom", message: DOCUMENT_TOO_LARGE });
+    return z.NEVER;
+  }
+  try {
+    return JSON.parse(value) as unknown;
+  } catch {
+    ctx.addIssue({ code: "custom", message: "The model document is not valid JSON." });
+    return z.NEVER;
+  }
+});
 
 export const createProposalInput = z.object({
   familySlug: z.string().trim().min(1, { error: "Choose a model family." }).max(100),
@@ -48,7 +58,7 @@ export type CreateProposalInput = z.infer<typeof createProposalInput>;
 export const saveRevisionInput = z.object({
   proposalId: id("proposal"),
   version,
-  document: z.union([documentText, z.record(z.string(), z.unknown())]),
+  document: documentInput,
   note: z.string().trim().max(2000).default(""),
 });
 export type SaveRevisionInput = z.infer<typeof saveRevisionInput>;

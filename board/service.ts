@@ -7,13 +7,11 @@ import { recordAudit } from "@/lib/audit";
 import { hasAnyRole } from "@/lib/auth/roles";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { AppError, type ErrorCode } from "@/lib/errors";
-import type { AcceptanceCriterionInput } from "@/lib/tb/analysis/acceptance";
-import type { ModelDocument } from "@/lib/tb/document";
 import { loadProposalFacts } from "./facts";
 import { notifyMove, notifyReviewerAssigned, notifyVerdict } from "./notify";
 import { storeMarkdownHtml } from "./markdown-html";
 import { getBoardCard, findFamilyBySlug, getLatestRevision, getRelease, getUserRoles, lockProposal } from "./queries";
-import { deriveRevisionFacts, parseDocument } from "./revision-facts";
+import { admitDocument, getProposalForRevision, prepareRevision, type PreparedRevision } from "./revision-intake";
 import { decideAssignReviewer, decideManageReviewers, decideMove, decideRevise, decideWaiveChecks, type MoveDecision, type RuleActor as RuleActorLike } from "./rules";
 import type { AssignInput, CreateProposalInput, EditTextInput, MoveInput, SaveRevisionInput, VerdictInput, WaiveInput } from "./schemas";
 import { STAGE_META } from "./stages";
@@ -42,38 +40,22 @@ async function bump(tx: Tx, proposalId: string, version: number, extra: Partial<
   await tx.update(proposals).set({ ...extra, version: version + 1, updatedAt: new Date() }).where(eq(proposals.id, proposalId));
 }
 
-function invalidDocument(issues: { path: string; message: string }[]): AppError {
-  const fieldErrors: Record<string, string[]> = {};
-  for (const i of issues) (fieldErrors[i.path || "document"] ??= []).push(i.message);
-  return new AppError("invalid:document", `The model document has ${issues.length} problem${issues.length === 1 ? "" : "s"}: ${issues.slice(0, 3).map((i) => `${i.path}: ${i.message}`).join("; ")}${issues.length > 3 ? "; …" : ""}`, fieldErrors, { issues });
-}
-
-async function baseDocumentOf(tx: Tx, baseReleaseId: string | null): Promise<ModelDocument | null> {
-  if (!baseReleaseId) return null;
-  const release = await getRelease(tx, baseReleaseId);
-  const parsed = release ? parseDocument(release.document) : null;
-  return parsed && parsed.ok ? parsed.doc : null;
-}
-
 export async function createProposal(actor: SessionUser, input: CreateProposalInput, document?: unknown): Promise<{ proposalId: string }> {
   if (!hasAnyRole(actor.roles, ["author"])) throw new AppError("forbidden:role", "Only authors may start proposals.");
+  const family = await findFamilyBySlug(db, input.familySlug);
+  if (!family) throw new AppError("not-found:family", "That model family does not exist.", { familySlug: ["Unknown family."] });
+  const base = input.baseReleaseId ? await getRelease(db, input.baseReleaseId) : null;
+  if (input.baseReleaseId && (!base || base.familyId !== family.id)) {
+    throw new AppError("invalid:base", "The base release does not belong to this family.", { baseReleaseId: ["Not a release of this family."] });
+  }
+  const doc = await admitDocument(document ?? base?.document ?? blankModelDocument(family.dimension as 1 | 2 | 3));
+  const { facts } = await prepareRevision({ familyId: family.id, baseReleaseId: base?.id ?? null }, doc);
   const result = await db.transaction(async (tx) => {
-    const family = await findFamilyBySlug(tx, input.familySlug);
-    if (!family) throw new AppError("not-found:family", "That model family does not exist.", { familySlug: ["Unknown family."] });
-    const base = input.baseReleaseId ? await getRelease(tx, input.baseReleaseId) : null;
-    if (input.baseReleaseId && (!base || base.familyId !== family.id)) {
-      throw new AppError("invalid:base", "The base release does not belong to this family.", { baseReleaseId: ["Not a release of this family."] });
-    }
-    const raw = document ?? base?.document ?? blankModelDocument(family.dimension as 1 | 2 | 3);
-    const parsed = parseDocument(raw);
-    if (!parsed.ok) throw invalidDocument(parsed.issues);
-    const baseDoc = await baseDocumentOf(tx, base?.id ?? null);
-    const facts = deriveRevisionFacts(parsed.doc, baseDoc, family.acceptanceCriteria as AcceptanceCriterionInput[]);
     const [proposal] = await tx
       .insert(proposals)
       .values({ familyId: family.id, baseReleaseId: base?.id ?? null, authorId: actor.id, title: input.title, rationale: input.rationale })
       .returning({ id: proposals.id });
-    await tx.insert(revisions).values({ proposalId: proposal.id, number: 1, document: parsed.doc, note: "first revision", createdBy: actor.id, ...facts });
+    await tx.insert(revisions).values({ proposalId: proposal.id, number: 1, document: doc, note: "first revision", createdBy: actor.id, ...facts });
     await recordAudit(tx, {
       actorId: actor.id,
       action: "proposal.created",
@@ -88,11 +70,13 @@ export async function createProposal(actor: SessionUser, input: CreateProposalIn
 }
 
 export async function saveRevision(actor: SessionUser, input: SaveRevisionInput): Promise<{ revision: number; version: number }> {
-  const parsed = parseDocument(input.document);
-  if (!parsed.ok) throw invalidDocument(parsed.issues);
+  const doc = await admitDocument(input.document);
+  const current = await getProposalForRevision(input.proposalId);
+  enforce(decideRevise(actor, current)); // before the engine works for someone who may not revise; checked again under the lock
+  const prepared = await prepareRevision(current, doc);
   return db.transaction(async (tx) => {
     const proposal = await lockFresh(tx, input.proposalId, input.version);
-    const { revision, version } = await appendRevision(tx, actor, proposal, parsed.doc, input.note);
+    const { revision, version } = await appendRevision(tx, actor, proposal, prepared, input.note);
     return { revision, version };
   });
 }
@@ -100,21 +84,22 @@ export async function saveRevision(actor: SessionUser, input: SaveRevisionInput)
 type LockedProposal = NonNullable<Awaited<ReturnType<typeof lockProposal>>>;
 
 /**
- * Adds the next revision to a proposal the caller has locked (rules, checks, audit, version bump). Shared by the
- * editor's save and by a refit's result.
+ * Adds the next revision to a proposal the caller has locked (rules, audit, version bump). Its facts were derived
+ * before the lock (prepareRevision), so the lock is held only for the write. Shared by the editor's save and by a
+ * refit's result.
  */
 export async function appendRevision(
   tx: Tx,
   actor: RuleActorLike,
   proposal: LockedProposal,
-  doc: ModelDocument,
+  prepared: PreparedRevision,
   note: string,
   auditExtra: Record<string, unknown> = {},
 ): Promise<{ revision: number; version: number; revisionId: string }> {
   enforce(decideRevise(actor, proposal));
+  if (prepared.baseReleaseId !== proposal.baseReleaseId) throw new Error("appendRevision: the revision was prepared against another base release");
+  const { doc, facts } = prepared;
   const latest = await getLatestRevision(tx, proposal.id);
-  const family = await loadProposalFacts(tx, proposal);
-  const facts = deriveRevisionFacts(doc, await baseDocumentOf(tx, proposal.baseReleaseId), family.criteria);
   if (latest && latest.sha256 === facts.sha256) {
     throw new AppError("invalid:unchanged", "Nothing changed since the latest revision, so no new revision was saved.");
   }

@@ -17,6 +17,14 @@ const envSchema = z.object({
   BANDGATE_ENV: z.enum(["production", "development", "test"]).default("production"),
   /** Reverse proxies in front of the web server that append to X-Forwarded-For; 0 = clients connect directly. */
   TRUSTED_PROXY_COUNT: z.coerce.number().int().min(0).max(10).default(0),
+  /** Largest basis (states of H(k): orbitals per cell, twice that with spin–orbit) a saved or uploaded model may have. */
+  MODEL_BASIS_LIMIT: z.coerce.number().int().min(1).max(2048).default(64),
+  /** Worker threads that run engine computations for web requests. Default: cores − 1, at least 2, at most 4. */
+  ENGINE_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  /** Computations that may wait for a thread; more are refused at once as "busy". */
+  ENGINE_QUEUE_LIMIT: z.coerce.number().int().min(0).max(10_000).default(64),
+  /** A computation running (or waiting) longer than this is stopped and its thread replaced. */
+  ENGINE_TASK_TIMEOUT_SECONDS: z.coerce.number().min(1).max(3600).default(60),
 });
 
 export type ServerEnv = z.infer<typeof envSchema>;

@@ -2,7 +2,7 @@
  * One error vocabulary for the whole app: "<kind>:<subject>" codes, mapped to HTTP statuses by kind.
  * Only the message of an AppError reaches a user; anything else is logged and shown as a generic failure.
  */
-export type ErrorKind = "unauthenticated" | "forbidden" | "invalid" | "not-found" | "conflict" | "refused" | "rate-limited" | "gone" | "unsupported";
+export type ErrorKind = "unauthenticated" | "forbidden" | "invalid" | "not-found" | "conflict" | "refused" | "rate-limited" | "gone" | "unsupported" | "too-large" | "unavailable";
 
 export type ErrorCode = `${ErrorKind}:${string}`;
 
@@ -16,6 +16,8 @@ const STATUS: Record<ErrorKind, number> = {
   "rate-limited": 429,
   gone: 410,
   unsupported: 415,
+  "too-large": 413,
+  unavailable: 503,
 };
 
 export class AppError extends Error {

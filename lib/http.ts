@@ -4,12 +4,14 @@ import { serverEnv } from "./env";
 import { AppError, fieldErrorsOf, toErrorResponse } from "./errors";
 import { findNul, NUL_MESSAGE } from "./pg-text";
 import { assertSameOriginJson, originsOf } from "./request-guard";
+import { JSON_BODY_LIMIT, readBodyText, type BodyLimit } from "./http-body";
 
-/** The JSON body, unvalidated (for services that validate it themselves); bad JSON or a NUL in any text is a 400. */
-export async function readJsonBody(request: Request): Promise<unknown> {
+/** The JSON body, unvalidated (for services that validate it themselves); too large is a 413, bad JSON or a NUL in any text a 400. */
+export async function readJsonBody(request: Request, limit: BodyLimit = JSON_BODY_LIMIT): Promise<unknown> {
+  const text = await readBodyText(request, limit);
   let body: unknown;
   try {
-    body = await request.json();
+    body = JSON.parse(text);
   } catch {
     throw new AppError("invalid:json", "The request body is not valid JSON.");
   }
@@ -18,9 +20,9 @@ export async function readJsonBody(request: Request): Promise<unknown> {
   return body;
 }
 
-/** Parse a JSON request body with zod; bad JSON or a bad shape is a 400 with field errors. */
-export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S): Promise<z.output<S>> {
-  const raw = await readJsonBody(request);
+/** Parse a JSON request body with zod; too large is a 413, bad JSON or a bad shape a 400 with field errors. */
+export async function parseJsonBody<S extends z.ZodType>(request: Request, schema: S, limit: BodyLimit = JSON_BODY_LIMIT): Promise<z.output<S>> {
+  const raw = await readJsonBody(request, limit);
   const parsed = schema.safeParse(raw);
   if (!parsed.success) throw new AppError("invalid:input", "The request body has problems.", fieldErrorsOf(parsed.error));
   return parsed.data;

@@ -5,11 +5,12 @@ import { proposals, referenceBandSets, revisions } from "@/db/schema";
 import { getAssignedReviewerIds, getFamilyCuratorIds, getLatestRevision } from "@/board/queries";
 import { parseDocument } from "@/board/revision-facts";
 import { AppError } from "@/lib/errors";
-import { FitInputError } from "@/lib/tb/analysis/fit-input";
+import { runEngine } from "@/lib/engine-pool/engine";
 import type { ModelDocument } from "@/lib/tb/document";
 import { listParameters } from "@/lib/tb/parameters";
-import { buildFitPreview, type FitPreview } from "./preview";
+import type { FitPreview } from "./preview";
 import type { StoredReference } from "./problem";
+import type { FitSpec } from "./spec";
 
 /** Everything a refit starts from: the proposal's people, the revision to start at, the reference set. */
 export interface FitContext {
@@ -49,17 +50,15 @@ export async function loadFitContext(conn: Conn, proposalId: string, referenceSe
   };
 }
 
-/** The preview doubles as the input check: anything the engine would refuse is refused here, before a job exists. */
-export function checkedPreview(ctx: FitContext, spec: Parameters<typeof buildFitPreview>[2]): FitPreview {
-  try {
-    return buildFitPreview(ctx.document, ctx.parsedReference, spec);
-  } catch (err) {
-    if (err instanceof FitInputError) {
-      const message = inWords(err.message.replace(/^fit: /, ""), ctx.document);
-      throw new AppError("refused:fit-input", `This refit cannot start: ${message}.`, undefined, { reasons: [message] });
-    }
-    throw err;
-  }
+/**
+ * The preview doubles as the input check: anything the engine would refuse is refused here, before a job exists.
+ * It is computed on an engine thread (it evaluates the bands and their derivatives at every reference point).
+ */
+export async function checkedPreview(ctx: FitContext, spec: FitSpec): Promise<FitPreview> {
+  const result = await runEngine("fitPreview", ctx.document, ctx.parsedReference, spec);
+  if (result.ok) return result.preview;
+  const message = inWords(result.message.replace(/^fit: /, ""), ctx.document);
+  throw new AppError("refused:fit-input", `This refit cannot start: ${message}.`, undefined, { reasons: [message] });
 }
 
 /** Engine messages name parameters by key and open bounds as Infinity; people read labels and ∞. */

@@ -20,7 +20,7 @@ import { checkedPreview, loadFitContext } from "./context";
 import type { FitPreview } from "./preview";
 import { countActiveFits, getFitRun } from "./queries";
 import { fitRevisionNote } from "./record";
-import { fittedDocument, fittedEnergyRange } from "./result-document";
+import { prepareFitRevision } from "./fit-revision";
 import { fitSpecSchema, type FitSpec } from "./spec";
 
 export function parseFitSpec(input: unknown): FitSpec {
@@ -67,7 +67,7 @@ export async function createFitRun(actor: SessionUser, proposalId: string, input
   const spec = parseFitSpec(input);
   const ctx = await loadFitContext(db, proposalId, spec.referenceSetId);
   enforce(decideStartFit(actor, ctx.facts, 0));
-  const preview = checkedPreview(ctx, spec);
+  const preview = await checkedPreview(ctx, spec);
   refuseUndetermined(preview, ctx.document);
   const fitId = await db.transaction(async (tx) => {
     await lockPerson(tx, actor.id);
@@ -156,31 +156,31 @@ export async function applyFit(actor: SessionUser, fitId: string, input: unknown
   if (!parsed.success) throw new AppError("invalid:input", "The request body has problems.", fieldErrorsOf(parsed.error));
   const found = await requireFit(fitId);
   const ctx = await loadFitContext(db, found.run.proposalId, found.run.referenceSetId, found.run.baseRevisionId);
+  // Saved on top of the latest revision, so its later edits (metadata, other fits' values) are kept — but only when
+  // that loses nothing: a revision that changed parameters this fit held fixed would be undone. The document and its
+  // facts are computed before the lock; the lock then confirms nothing changed meanwhile.
+  const latest = await getLatestRevision(db, found.run.proposalId);
+  const latestDoc = latest && latest.id !== found.run.baseRevisionId ? parseDocument(latest.document) : null;
+  const outcome = found.run.outcome;
+  const keeps = !latest || !latestDoc || (latestDoc.ok && outcome !== null && fitStillApplies(ctx.document, latestDoc.doc, outcome));
+  const moved = outcome !== null && outcome.values.some((v, i) => v !== outcome.start[i]);
+  const prepared = outcome && moved && keeps ? await prepareFitRevision(ctx, found.run, latestDoc?.ok ? latestDoc.doc : ctx.document, outcome) : null;
   return db.transaction(async (tx) => {
     const [run] = await tx.select().from(fitRuns).where(eq(fitRuns.id, fitId)).for("update");
     const proposal = await lockProposal(tx, run.proposalId);
     if (!proposal) throw new AppError("not-found:proposal", "That proposal does not exist.");
     enforce(decideApplyFit(actor, { ...ctx.facts, stage: proposal.stage }, { status: run.status, hasOutcome: Boolean(run.outcome), resultRevision: Boolean(run.resultRevisionId), rerun: Boolean(run.rerunOf) }));
-    if (proposal.version !== parsed.data.version) {
+    if (proposal.version !== parsed.data.version || (await getLatestRevision(tx, proposal.id))?.id !== latest?.id) {
       throw new AppError("conflict:stale", `Someone changed this proposal while you were looking (it is now at version ${proposal.version}). Reload to see its current revisions.`);
     }
-    const outcome = run.outcome as NonNullable<typeof run.outcome>;
-    if (outcome.values.every((v, i) => v === outcome.start[i])) {
-      throw new AppError("refused:unchanged", "This fit moved no value from its start, so there is nothing to save as a revision.");
-    }
-    // Saved on top of the latest revision, so its later edits (metadata, other fits' values) are kept — but only when
-    // that loses nothing: a revision that changed parameters this fit held fixed would be undone.
-    const latest = await getLatestRevision(tx, proposal.id);
-    const latestDoc = latest && latest.id !== run.baseRevisionId ? parseDocument(latest.document) : null;
-    if (latest && latestDoc && (!latestDoc.ok || !fitStillApplies(ctx.document, latestDoc.doc, outcome))) {
+    if (!moved) throw new AppError("refused:unchanged", "This fit moved no value from its start, so there is nothing to save as a revision.");
+    if (!prepared) {
       throw new AppError(
         "refused:superseded",
-        `Revision ${latest.number} changed parameters this fit kept fixed (it started from revision ${found.baseRevisionNumber}); saving it would undo them. Start a new refit from revision ${latest.number} instead.`,
+        `Revision ${latest?.number} changed parameters this fit kept fixed (it started from revision ${found.baseRevisionNumber}); saving it would undo them. Start a new refit from revision ${latest?.number} instead.`,
       );
     }
-    const range = fittedEnergyRange(ctx.document, ctx.parsedReference, run.spec, outcome.shift);
-    const doc = fittedDocument(latestDoc?.ok ? latestDoc.doc : ctx.document, outcome, run.spec, ctx.reference, fitId, range);
-    const saved = await appendRevision(tx, actor, proposal, doc, fitRevisionNote(outcome, found.referenceName, fitId), { fit: fitId });
+    const saved = await appendRevision(tx, actor, proposal, prepared, fitRevisionNote(run.outcome as NonNullable<typeof run.outcome>, found.referenceName, fitId), { fit: fitId });
     await tx.update(fitRuns).set({ resultRevisionId: saved.revisionId, applyNote: null }).where(eq(fitRuns.id, fitId));
     return { revision: saved.revision, version: saved.version };
   });

@@ -5,13 +5,14 @@ import { fitRuns, type FitRun } from "@/db/schema";
 import { decideRevise } from "@/board/rules";
 import { getLatestRevision, getUserRoles, lockProposal } from "@/board/queries";
 import { parseDocument } from "@/board/revision-facts";
+import type { PreparedRevision } from "@/board/revision-intake";
 import { appendRevision } from "@/board/service";
 import { recordAudit } from "@/lib/audit";
 import { AppError } from "@/lib/errors";
 import { loadFitContext, type FitContext } from "./context";
 import { fitStillApplies } from "./apply-onto";
 import { notifyFitFinished } from "./notify-finished";
-import { fittedDocument, fittedEnergyRange } from "./result-document";
+import { prepareFitRevision } from "./fit-revision";
 import { fitRevisionNote, statusOfOutcome, undeterminedNames, type CostPoint, type FitOutcome } from "./record";
 
 /* The worker's side of a fit run, its end: the outcome stored (and saved as a revision when it may be), or failure.
@@ -33,6 +34,18 @@ const NOT_SAVED: Record<FitOutcome["status"], string> = {
  * author may save it by hand (nothing is overwritten silently).
  */
 export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcome, history: CostPoint[]): Promise<void> {
+  // The revision it would become is computed before the locks (on an engine thread); used only if still applicable.
+  const saveable = !run.rerunOf && outcome.status === "converged" && outcome.values.some((v, i) => v !== outcome.start[i]) && undeterminedNames(outcome).length === 0;
+  let prepared: PreparedRevision | null = null;
+  let notPrepared: string | null = null;
+  if (saveable) {
+    try {
+      prepared = await prepareFitRevision(ctx, run, ctx.document, outcome);
+    } catch (err) {
+      if (!(err instanceof AppError)) throw err;
+      notPrepared = `Not saved as a revision: ${err.message}`;
+    }
+  }
   await db.transaction(async (tx) => {
     const [current] = await tx.select().from(fitRuns).where(eq(fitRuns.id, run.id)).for("update");
     if (!current || current.status !== "running" || current.attempts !== run.attempts) return;
@@ -61,17 +74,15 @@ export async function finishFit(run: FitRun, ctx: FitContext, outcome: FitOutcom
       } else {
         const decision = decideRevise(starter, proposal);
         if (!decision.allowed) applyNote = `Not saved as a revision: ${decision.reasons.join(" ")}`;
-        else {
-          const range = fittedEnergyRange(ctx.document, ctx.parsedReference, run.spec, outcome.shift);
-          const doc = fittedDocument(ctx.document, outcome, run.spec, ctx.reference, run.id, range);
+        else if (prepared) {
           try {
-            const saved = await tx.transaction((sp) => appendRevision(sp, starter, proposal, doc, fitRevisionNote(outcome, ctx.reference.name, run.id), { fit: run.id }));
+            const saved = await tx.transaction((sp) => appendRevision(sp, starter, proposal, prepared, fitRevisionNote(outcome, ctx.reference.name, run.id), { fit: run.id }));
             resultRevisionId = saved.revisionId;
           } catch (err) {
             if (!(err instanceof AppError)) throw err;
             applyNote = `Not saved as a revision: ${err.message}`;
           }
-        }
+        } else applyNote = notPrepared;
       }
     }
     await tx

@@ -20,6 +20,11 @@ export class RecentResults<T> {
     return value;
   }
 
+  /** Drops a remembered result, e.g. a computation that failed and should be tried again next time. */
+  forget(key: string): void {
+    this.entries.delete(key);
+  }
+
   get size(): number {
     return this.entries.size;
   }

@@ -46,17 +46,28 @@ export const HOPPING_SCHEMA = z.strictObject({
 const STANDARD_LATTICES = ["chain", "square", "rectangular", "hexagonal", "cubic", "fcc", "bcc", "hcp", "tetragonal"] as const;
 export type StandardLattice = (typeof STANDARD_LATTICES)[number];
 
+/** Every band view samples the path at this many points, so its size bounds their cost (as many as a reference file's rows). */
+const pointsTotal = z.number().int().min(2).max(20_000).optional();
+const PATH_LABELS_MAX = 64;
+
 export const KPATH_SCHEMA = z.discriminatedUnion("type", [
   z.strictObject({
     type: z.literal("standard"),
     lattice: z.enum(STANDARD_LATTICES),
-    pointsTotal: z.number().int().min(2).max(100_000).optional(),
+    pointsTotal,
   }),
   z.strictObject({
     type: z.literal("custom"),
-    points: z.record(label, z.array(finite).min(1).max(3)).describe("fractional coordinates in the reciprocal primitive vectors"),
-    segments: z.array(z.array(label).min(2)).min(1).describe("each inner list is one continuous run of labels"),
-    pointsTotal: z.number().int().min(2).max(100_000).optional(),
+    points: z
+      .record(label, z.array(finite).min(1).max(3))
+      .refine((points) => Object.keys(points).length <= PATH_LABELS_MAX, { message: `at most ${PATH_LABELS_MAX} labelled points` })
+      .describe("fractional coordinates in the reciprocal primitive vectors"),
+    segments: z
+      .array(z.array(label).min(2).max(PATH_LABELS_MAX))
+      .min(1)
+      .max(PATH_LABELS_MAX)
+      .describe("each inner list is one continuous run of labels"),
+    pointsTotal,
   }),
 ]);
 

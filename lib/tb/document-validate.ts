@@ -3,11 +3,18 @@ import type { ModelDocument } from "./document-schema";
 import { checkConventions } from "./conventions";
 import { STANDARD_PATHS, matchStandardLattice } from "./kpath-standard";
 import { cellMeasure, reciprocalVectors, type Vec3 } from "./lattice";
-import { distinctBondLengths, findBonds } from "./neighbours";
+import { bondSearchSize, distinctBondLengths, findBonds } from "./neighbours";
 import { ORBITALS, bondKey, bondSymmetries, mirrorBondKey, orbitalKind, parseBondKey, type Orbital, type OrbitalKind } from "./orbitals";
 import { listParameters } from "./parameters";
 
 export const DEFAULT_SHELL_TOLERANCE = 1e-3;
+
+/**
+ * Site pairs the neighbour searches of one document may look at, all shells together (about half a second of one
+ * core): a realistic document needs a few thousand (the demo models) to a few hundred thousand (a 16-site supercell),
+ * while a shell distance far beyond the cell would make the search, and every later compile, run for hours.
+ */
+export const BOND_SEARCH_BUDGET = 2_000_000;
 
 type Issues = { errors: DocumentIssue[]; warnings: DocumentIssue[] };
 
@@ -91,6 +98,7 @@ function checkShells(doc: ModelDocument, out: Issues): void {
   const reciprocal = reciprocalVectors(vectors);
   const positions = doc.sites.map((s) => s.position as Vec3);
   const seen = new Set<string>();
+  let budget = BOND_SEARCH_BUDGET;
   doc.shells.forEach((shell, i) => {
     const [a, b] = shell.species;
     const unordered = [a, b].sort().join("|") + `|${shell.index}`;
@@ -104,10 +112,23 @@ function checkShells(doc: ModelDocument, out: Issues): void {
     if (!fromSites.length || !toSites.length) return;
     checkShellParams(doc, i, out);
     const tol = shell.tolerance ?? DEFAULT_SHELL_TOLERANCE;
+    const cost = bondSearchSize(reciprocal, positions, fromSites, toSites, shell.distance + tol);
+    if (cost > budget) {
+      out.errors.push({
+        path: `shells[${i}].distance`,
+        message: `shell distance ${shell.distance} Å reaches too far for this cell: finding its neighbours would compare ${cost.toLocaleString("en-US")} site pairs, and a document's shells may compare at most ${BOND_SEARCH_BUDGET.toLocaleString("en-US")} together`,
+      });
+      return;
+    }
+    budget -= cost;
     const bonds = findBonds(vectors, reciprocal, positions, fromSites, toSites, shell.distance - tol, shell.distance + tol);
     if (!bonds.length) {
-      const near = distinctBondLengths(vectors, reciprocal, positions, fromSites, toSites, shell.distance * 1.5 + 1).slice(0, 4);
-      out.errors.push({ path: `shells[${i}].distance`, message: `shell distance ${shell.distance} Å matches no ${a}–${b} neighbour within ${tol} Å (nearest distances: ${near.join(", ") || "none"} Å)` });
+      const reach = shell.distance * 1.5 + 1;
+      const hintCost = bondSearchSize(reciprocal, positions, fromSites, toSites, reach);
+      const near = hintCost <= budget ? distinctBondLengths(vectors, reciprocal, positions, fromSites, toSites, reach).slice(0, 4) : null;
+      budget -= Math.min(budget, hintCost);
+      const hint = near ? ` (nearest distances: ${near.join(", ") || "none"} Å)` : "";
+      out.errors.push({ path: `shells[${i}].distance`, message: `shell distance ${shell.distance} Å matches no ${a}–${b} neighbour within ${tol} Å${hint}` });
     }
   });
 }

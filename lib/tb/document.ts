@@ -1,3 +1,4 @@
+import { basisSize, basisTooLargeMessage } from "./basis";
 import { MODEL_DOCUMENT_SCHEMA, type ModelDocument } from "./document-schema";
 import { validateSemantics } from "./document-validate";
 
@@ -38,13 +39,24 @@ export interface ValidationReport {
   errors: DocumentIssue[];
   /** Not fatal: e.g. a parameter without a citation or a reason. */
   warnings: DocumentIssue[];
+  /** Set when the basis is above `maxBasis`: the document was refused before its meaning was checked. */
+  oversize?: { basis: number; limit: number };
+}
+
+export interface ValidationOptions {
+  /** The largest basis (states of H(k)) to accept; larger documents are refused before the costlier checks. */
+  maxBasis?: number;
 }
 
 /** Shape and meaning checks together; never throws. */
-export function validateModelDocument(input: unknown): ValidationReport {
+export function validateModelDocument(input: unknown, opts: ValidationOptions = {}): ValidationReport {
   const result = MODEL_DOCUMENT_SCHEMA.safeParse(input);
   if (!result.success) {
     return { document: null, errors: result.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })), warnings: [] };
+  }
+  if (opts.maxBasis !== undefined && basisSize(result.data) > opts.maxBasis) {
+    const message = basisTooLargeMessage(result.data, opts.maxBasis);
+    return { document: null, errors: [{ path: "sites", message }], warnings: [], oversize: { basis: basisSize(result.data), limit: opts.maxBasis } };
   }
   const { errors, warnings } = validateSemantics(result.data);
   return { document: errors.length ? null : result.data, errors, warnings };

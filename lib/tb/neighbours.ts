@@ -8,7 +8,7 @@ export interface Bond {
   length: number;
 }
 
-function translationRange(vectors: number[][], reciprocal: number[][], reach: number): number[] {
+function translationRange(reciprocal: number[][], reach: number): number[] {
   return reciprocal.map((b) => Math.ceil((reach * norm(b)) / (2 * Math.PI)) + 1);
 }
 
@@ -27,6 +27,18 @@ function* translations(range: number[]): Generator<number[]> {
   }
 }
 
+function searchRange(reciprocal: number[][], positions: Vec3[], fromSites: number[], toSites: number[], maxLength: number): number[] {
+  let maxOffset = 0;
+  for (const i of fromSites) for (const j of toSites) maxOffset = Math.max(maxOffset, norm(sub(positions[j], positions[i])));
+  return translationRange(reciprocal, maxLength + maxOffset);
+}
+
+/** How many site pairs `findBonds` looks at for these arguments: its cost, known before running it. */
+export function bondSearchSize(reciprocal: number[][], positions: Vec3[], fromSites: number[], toSites: number[], maxLength: number): number {
+  const cells = searchRange(reciprocal, positions, fromSites, toSites, maxLength).reduce((n, r) => n * (2 * r + 1), 1);
+  return cells * fromSites.length * toSites.length;
+}
+
 /**
  * Every bond from a site in `fromSites` to a periodic image of a site in `toSites` whose length is
  * within [minLength, maxLength]. Self-bonds of zero length are never returned.
@@ -40,9 +52,7 @@ export function findBonds(
   minLength: number,
   maxLength: number,
 ): Bond[] {
-  let maxOffset = 0;
-  for (const i of fromSites) for (const j of toSites) maxOffset = Math.max(maxOffset, norm(sub(positions[j], positions[i])));
-  const range = translationRange(vectors, reciprocal, maxLength + maxOffset);
+  const range = searchRange(reciprocal, positions, fromSites, toSites, maxLength);
   const bonds: Bond[] = [];
   for (const t of translations(range)) {
     const shift = [0, 0, 0];

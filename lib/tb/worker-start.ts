@@ -1,12 +1,12 @@
-import { Worker } from "node:worker_threads";
+import { Worker, type WorkerOptions } from "node:worker_threads";
 
 /**
  * Starts a worker thread from a module beside `here` (pass import.meta.url). Compiled JavaScript runs the `.js`
  * file directly; when the caller runs as TypeScript source (tsx), the thread does not inherit the TypeScript loader,
  * so it registers the loader before importing the `.ts` module.
  */
-export function startModuleWorker(here: string, name: string): Worker {
-  if (!here.endsWith(".ts")) return new Worker(new URL(`./${name}.js`, here));
+export function startModuleWorker(here: string, name: string, options: WorkerOptions = {}): Worker {
+  if (!here.endsWith(".ts")) return new Worker(new URL(`./${name}.js`, here), options);
   const target = new URL(`./${name}.ts`, here).href;
   let api = "tsx/esm/api";
   try {
@@ -15,5 +15,5 @@ export function startModuleWorker(here: string, name: string): Worker {
     // keep the bare specifier: it resolves from the working directory
   }
   const code = `import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(target)}); })`;
-  return new Worker(code, { eval: true });
+  return new Worker(code, { ...options, eval: true });
 }

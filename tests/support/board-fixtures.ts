@@ -33,14 +33,14 @@ export interface BoardWorld {
   stranger: Person;
 }
 
-/** A fresh family with a release, its curator, an author, three reviewers and a bystander. */
-export async function createBoardWorld(opts: { criteria?: unknown[]; requiredAccepts?: number } = {}): Promise<BoardWorld> {
-  const base = chainDocument();
+/** A fresh family with a release (the demo chain unless `base` is given), its curator, an author, three reviewers and a bystander. */
+export async function createBoardWorld(opts: { criteria?: unknown[]; requiredAccepts?: number; base?: ModelDocument } = {}): Promise<BoardWorld> {
+  const base = opts.base ?? chainDocument();
   const curator = await createPerson(["curator"]);
   const slug = `fam-${randomUUID().slice(0, 8)}`;
   const [family] = await db
     .insert(modelFamilies)
-    .values({ slug, title: `Family ${slug}`, description: "test", dimension: 1, acceptanceCriteria: opts.criteria ?? [], requiredAccepts: opts.requiredAccepts ?? 2 })
+    .values({ slug, title: `Family ${slug}`, description: "test", dimension: base.lattice.dimension, acceptanceCriteria: opts.criteria ?? [], requiredAccepts: opts.requiredAccepts ?? 2 })
     .returning({ id: modelFamilies.id });
   await db.insert(familyCurators).values({ familyId: family.id, userId: curator.id });
   const [release] = await db

@@ -2,12 +2,9 @@
 
 import { redirect } from "next/navigation";
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
-import { uploadReferenceBands } from "@/board/reference-upload";
 import { assignInput, createProposalInput, saveRevisionInput, verdictInput, waiveInput } from "@/board/schemas";
 import { assignReviewer, createProposal, giveVerdict, saveRevision, unassignReviewer, waiveChecks } from "@/board/service";
 import { defineAction } from "@/lib/action";
-import { AppError } from "@/lib/errors";
 
 const refresh = (id: string) => revalidatePath(`/proposals/${id}`);
 
@@ -70,36 +67,6 @@ export const verdictAction = defineAction({
   run: async (input, user) => {
     const result = await giveVerdict(user!, input);
     refresh(input.proposalId);
-    return result;
-  },
-});
-
-const referenceForm = z.object({
-  proposalId: z.uuid(),
-  name: z.string().trim().min(1, { error: "Name the reference set." }).max(200),
-  method: z.string().optional(),
-  functional: z.string().optional(),
-  code: z.string().optional(),
-  structureSource: z.string().optional(),
-  alignmentNote: z.string().optional(),
-});
-
-export const uploadReferenceAction = defineAction({
-  access: { roles: ["author"] },
-  schema: referenceForm,
-  message: "Reference bands stored.",
-  run: async ({ proposalId, name, ...provenance }, user, form) => {
-    const file = form.get("file");
-    if (!(file instanceof File) || file.size === 0) throw new AppError("invalid:file", "Choose a CSV or JSON file.", { file: ["Choose a CSV or JSON file."] });
-    const blank = (v?: string) => (v && v.trim() ? v.trim() : undefined);
-    const result = await uploadReferenceBands(user!, {
-      proposalId,
-      name,
-      fileName: file.name,
-      content: await file.text(),
-      provenance: Object.fromEntries(Object.entries(provenance).map(([k, v]) => [k, blank(v)]).filter(([, v]) => v !== undefined)),
-    });
-    refresh(proposalId);
     return result;
   },
 });

@@ -2,6 +2,7 @@
 
 import { useRef, useState } from "react";
 import { canonicalJson } from "@/lib/tb/canonical";
+import { DOCUMENT_MAX_BYTES, DOCUMENT_TOO_LARGE } from "@/lib/size-limits";
 import { validateModelDocument, type DocumentIssue } from "@/lib/tb/document";
 import type { Draft } from "./draft-path";
 import { asText } from "./draft-read";
@@ -14,11 +15,15 @@ export function downloadName(name: string): string {
 }
 
 /** Upload replaces the draft only with a valid document; download writes the canonical text, pretty. */
-export function DocumentTransfer({ draft, onReplace }: { draft: Draft; onReplace: (doc: Draft) => void }) {
+export function DocumentTransfer({ draft, onReplace, basisLimit }: { draft: Draft; onReplace: (doc: Draft) => void; basisLimit?: number }) {
   const fileInput = useRef<HTMLInputElement>(null);
   const [notice, setNotice] = useState<Notice | null>(null);
 
   const upload = async (file: File) => {
+    if (file.size > DOCUMENT_MAX_BYTES) {
+      setNotice({ kind: "error", text: `${DOCUMENT_TOO_LARGE} Nothing was replaced.`, issues: [] });
+      return;
+    }
     let parsed: unknown;
     try {
       parsed = JSON.parse(await file.text());
@@ -26,7 +31,11 @@ export function DocumentTransfer({ draft, onReplace }: { draft: Draft; onReplace
       setNotice({ kind: "error", text: `${file.name} is not JSON (${error instanceof Error ? error.message : "unreadable"}); nothing was replaced.`, issues: [] });
       return;
     }
-    const report = validateModelDocument(parsed);
+    const report = validateModelDocument(parsed, { maxBasis: basisLimit });
+    if (report.oversize) {
+      setNotice({ kind: "error", text: `${report.errors[0].message} Nothing was replaced.`, issues: [] });
+      return;
+    }
     if (!report.document) {
       setNotice({ kind: "error", text: `${file.name} is not a valid model document; nothing was replaced.`, issues: report.errors });
       return;

@@ -27,11 +27,13 @@ export interface ModelEditorProps {
   /** Name of the hidden input that always holds JSON.stringify of the current document. */
   inputName: string;
   onChange?: (doc: unknown, valid: boolean) => void;
+  /** The instance's largest basis (states of H(k)); a larger model is shown as a problem and is not previewed. */
+  basisLimit?: number;
 }
 
 /** Parameter editor of a model document with its bands, gap and checks computed live in a Web Worker. */
-export function ModelEditor({ initialDocument, baseDocument, inputName, onChange }: ModelEditorProps) {
-  const { draft, replace, api, report, issues, warningCount, needs } = useModelDraft(initialDocument, baseDocument);
+export function ModelEditor({ initialDocument, baseDocument, inputName, onChange, basisLimit }: ModelEditorProps) {
+  const { draft, replace, api, report, issues, warningCount, needs } = useModelDraft(initialDocument, baseDocument, basisLimit);
   const validBase = useMemo(() => (baseDocument === null ? null : validateModelDocument(baseDocument).document), [baseDocument]);
   const preview = useBandPreview(report.document, validBase);
   const valid = report.document !== null;
@@ -52,7 +54,7 @@ export function ModelEditor({ initialDocument, baseDocument, inputName, onChange
           <section id={api.idFor("section:document")} tabIndex={-1} aria-label="Document" className="space-y-2 focus:outline-none">
             <div className="grid grid-cols-[minmax(0,1fr)_auto] items-end gap-3">
               <TextInput path={["name"]} label="Model name" visibleLabel />
-              <DocumentTransfer draft={draft} onReplace={replace} />
+              <DocumentTransfer draft={draft} onReplace={replace} basisLimit={basisLimit} />
             </div>
             <TextInput path={["description"]} label="Description" optional visibleLabel />
             {baseDocument === null ? (

@@ -28,11 +28,11 @@ function collect(issues: DocumentIssue[], fields: string[], draft: Draft, idFor:
 }
 
 /** The editor's state: the draft, its validation mapped onto fields, and the citations it still needs. */
-export function useModelDraft(initialDocument: unknown, base: unknown | null) {
+export function useModelDraft(initialDocument: unknown, base: unknown | null, basisLimit?: number) {
   const [draft, setDraft] = useState<Draft>(() => toDraft(initialDocument));
   const prefix = useId();
   const idFor = useCallback((path: string) => `${prefix}-${path}`, [prefix]);
-  const report = useMemo(() => validateModelDocument(draft), [draft]);
+  const report = useMemo(() => validateModelDocument(draft, { maxBasis: basisLimit }), [draft, basisLimit]);
 
   const needs = useMemo<CitationNeed[]>(() => {
     const changed = new Set(changedParameterKeys(draft, base));

@@ -3,6 +3,7 @@ import { createProposalInput } from "@/board/schemas";
 import { createProposal } from "@/board/service";
 import { requireRole } from "@/lib/auth/guard";
 import { handleRoute, parseJsonBody } from "@/lib/http";
+import { DOCUMENT_BODY_LIMIT } from "@/lib/http-body";
 
 export const dynamic = "force-dynamic";
 
@@ -10,7 +11,7 @@ const body = createProposalInput.extend({ document: z.record(z.string(), z.unkno
 
 /** POST /api/proposals {familySlug, baseReleaseId|null, title, rationale?, document?} — start a proposal (authors). */
 export const POST = handleRoute(async (request: Request) => {
-  const { document, ...input } = await parseJsonBody(request, body);
+  const { document, ...input } = await parseJsonBody(request, body, DOCUMENT_BODY_LIMIT);
   const user = await requireRole("author");
   return Response.json(await createProposal(user, input, document), { status: 201 });
 });

@@ -7,7 +7,7 @@ import { PageTitle } from "@/app/_components/page-title";
 import { SafetyNote } from "@/app/_components/safety-note";
 import { requirePageUser } from "@/lib/auth/guard";
 import { getCurrentFamilyDocument, getFamilyBySlug } from "@/lib/families/queries";
-import { buildModelView } from "@/lib/families/view";
+import { runEngine } from "@/lib/engine-pool/engine";
 import { ParameterTable } from "./parameter-table";
 
 export const metadata: Metadata = { title: "Model family" };
@@ -19,7 +19,7 @@ export default async function FamilyPage({ params }: { params: Promise<{ slug: s
   const family = await getFamilyBySlug(slug);
   if (!family) notFound();
   const current = await getCurrentFamilyDocument(family.id, family.startingDocument);
-  const result = current ? buildModelView(current.document) : null;
+  const result = current ? await runEngine("modelView", current.document) : null;
   return (
     <>
       <PageTitle title={family.title} lead={family.description} />

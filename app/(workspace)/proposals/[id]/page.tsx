@@ -4,8 +4,9 @@ import { notFound } from "next/navigation";
 import { BandPlot, type BandSeries } from "@/app/_components/band-plot";
 import { Markdown } from "@/app/_components/markdown";
 import { SafetyNote } from "@/app/_components/safety-note";
-import { compareBandsOnPath } from "@/board/band-comparison";
 import { loadMarkdownHtml } from "@/board/markdown-html";
+import { runEngine } from "@/lib/engine-pool/engine";
+import { serverEnv } from "@/lib/env";
 import { getProposalView } from "@/board/proposal-view";
 import { listReviewers } from "@/board/queries";
 import { VERDICT_LABEL } from "@/board/stages";
@@ -37,7 +38,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
   const htmlOf = await loadMarkdownHtml([proposal.rationale, ...view.verdicts.map((v) => v.summary)]);
   const candidates = may.manageReviewers ? (await listReviewers()).filter((r) => r.id !== proposal.authorId) : [];
   const comparison = latestDocument
-    ? compareBandsOnPath(latestDocument, baseDocument, view.references.map((r) => ({ name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } })))
+    ? await runEngine("bandComparison", latestDocument, baseDocument, view.references.map((r) => ({ name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } })))
     : null;
   const series: BandSeries[] = comparison
     ? [
@@ -111,7 +112,7 @@ export default async function ProposalPage({ params }: { params: Promise<{ id: s
       <div className="mt-8 space-y-8">
         {may.revise && latest ? (
           <Section title="Parameters">
-            <RevisionEditor proposalId={proposal.id} version={proposal.version} document={latest.document} baseDocument={baseDocument} />
+            <RevisionEditor proposalId={proposal.id} version={proposal.version} document={latest.document} baseDocument={baseDocument} basisLimit={serverEnv().MODEL_BASIS_LIMIT} />
           </Section>
         ) : (
           <>

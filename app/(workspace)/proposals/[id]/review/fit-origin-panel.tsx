@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { db } from "@/db/client";
 import { loadFitContext } from "@/lib/fits/context";
-import { buildFitQuality } from "@/lib/fits/quality";
+import { runEngine } from "@/lib/engine-pool/engine";
 import { getFitOfRevision } from "@/lib/fits/queries";
 import { describeFitWeights } from "@/lib/fits/result-document";
 import { parameterLabels } from "@/lib/tb/parameters";
@@ -17,7 +17,7 @@ export async function FitOriginSection({ proposalId, revisionId, revisionNumber,
   const { run } = row;
   const outcome = run.outcome!;
   const ctx = await loadFitContext(db, proposalId, run.referenceSetId, run.baseRevisionId);
-  const quality = buildFitQuality(ctx.document, document, ctx.parsedReference, run.spec, outcome);
+  const quality = await runEngine("fitQuality", ctx.document, document, ctx.parsedReference, run.spec, outcome);
   return (
     <Section title="How these numbers were obtained">
     <div data-testid="fit-origin">

@@ -12,11 +12,11 @@ import { requirePageUser } from "@/lib/auth/guard";
 import { BOARD_ROLES } from "@/lib/auth/navigation";
 import { validityText } from "@/lib/families/view";
 import type { ParsedReferenceBands } from "@/lib/reference-bands";
-import { buildBandView, type BandViewData } from "@/lib/review/band-view";
+import { runEngine } from "@/lib/engine-pool/engine";
+import type { BandViewData } from "@/lib/review/band-view";
 import { proposalSlug } from "@/lib/review/export-names";
-import { buildMetrics, type MetricsRow } from "@/lib/review/metrics";
+import type { MetricsRow } from "@/lib/review/metrics";
 import { RecentResults } from "@/lib/review/recent-results";
-import { buildParameterDiff } from "@/lib/review/param-diff";
 import { canonicalJson } from "@/lib/tb/canonical";
 import { ProposalHeading } from "../proposal-heading";
 import { Section } from "../section";
@@ -33,10 +33,19 @@ import { VerdictsPanel } from "./verdicts-panel";
 
 export const metadata: Metadata = { title: "Review workspace" };
 
-/** Band views and metrics of recently viewed proposals: a page refresh (e.g. after a remark) does not recompute them. */
-const bandViews = new RecentResults<BandViewData>(32);
-const metricsTables = new RecentResults<MetricsRow[]>(64);
+/**
+ * Band views and metrics of recently viewed proposals, computed on engine threads: a page refresh (e.g. after a
+ * remark) does not recompute them, and views arriving while one is computed wait for it rather than start another.
+ */
+const bandViews = new RecentResults<Promise<BandViewData>>(32);
+const metricsTables = new RecentResults<Promise<MetricsRow[]>>(64);
 export const dynamic = "force-dynamic";
+
+function remembered<T>(store: RecentResults<Promise<T>>, key: string, compute: () => Promise<T>): Promise<T> {
+  const result = store.get(key, compute);
+  result.catch(() => store.forget(key)); // a refused or failed computation is tried again on the next view
+  return result;
+}
 
 type Search = Promise<{ from?: string; to?: string; remark?: string }>;
 
@@ -52,16 +61,16 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const from = await resolveSide(parseSide(search.from, baseDocument ? "base" : `r${Math.max(1, latest.number - 1)}`), baseDocument, view.baseVersion, (n) => getRevisionDocument(id, n));
   const to = await resolveSide(parseSide(search.to, `r${latest.number}`), baseDocument, view.baseVersion, (n) => getRevisionDocument(id, n));
   const window = latestDocument.validity.energyWindow ?? null;
-  const diff = to.doc ? buildParameterDiff(from.doc, to.doc, { window: window ?? undefined }) : null;
   const references = view.references.map((r) => ({ id: r.id, name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } }));
   // Keyed by immutable ids: the latest revision, the base release and the reference sets.
   const inputsKey = [latest.id, proposal.baseReleaseId ?? "none", ...references.map((r) => r.id)].join("|");
-  const bandView = bandViews.get(inputsKey, () => buildBandView(latestDocument, baseDocument, references));
+  const diffResult = to.doc ? runEngine("parameterDiff", from.doc, to.doc, { window: window ?? undefined }) : Promise.resolve(null);
+  const bandViewResult = remembered(bandViews, inputsKey, () => runEngine("bandView", latestDocument, baseDocument, references));
+  const [diff, bandView, remarkRows] = await Promise.all([diffResult, bandViewResult, listRemarks(id)]);
   const metricsSettings = { window, alignment: bandView.proposedVbm === null ? ("none" as const) : ("vbm" as const) };
-  const metrics = metricsTables.get(`${inputsKey}|${metricsSettings.alignment}|${window ?? ""}`, () =>
-    buildMetrics(latestDocument, baseDocument, references[0] ?? null, metricsSettings),
+  const metrics = await remembered(metricsTables, `${inputsKey}|${metricsSettings.alignment}|${window ?? ""}`, () =>
+    runEngine("metrics", latestDocument, baseDocument, references[0] ?? null, metricsSettings),
   );
-  const remarkRows = await listRemarks(id);
   const htmlOf = await loadMarkdownHtml([proposal.rationale, ...view.verdicts.map((v) => v.summary), ...remarkRows.map((r) => r.body)]);
   const remarks = remarkRows.map((r) => ({ ...r, bodyHtml: htmlOf(r.body) }));
   const verdicts = view.verdicts.map((v) => ({ ...v, summaryHtml: htmlOf(v.summary) }));

@@ -3,7 +3,7 @@ import { db } from "@/db/client";
 import { getFamilyCuratorIds } from "@/board/queries";
 import type { SessionUser } from "@/lib/auth/session-user";
 import { serverEnv } from "@/lib/env";
-import { buildModelView } from "@/lib/families/view";
+import { runEngine } from "@/lib/engine-pool/engine";
 import { releaseCitation } from "@/lib/registry/citation";
 import { getFamilyIdentity, getReleaseById, getReleaseWithDocument, listReleasesOfFamily } from "@/lib/registry/queries";
 import { compareSemver, parseSemver } from "@/lib/registry/semver";
@@ -26,7 +26,7 @@ export async function getReleasePageView(viewer: SessionUser, slug: string, vers
     status: releaseStatus(release),
     successorVersion: successor?.version ?? null,
     newerVersions: newer,
-    model: buildModelView(release.document),
+    model: await runEngine("modelView", release.document),
     mayCurate: viewer.roles.includes("curator") && curators.includes(viewer.id),
     appUrl,
     pagePath,

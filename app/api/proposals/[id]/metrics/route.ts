@@ -2,9 +2,9 @@ import { getProposalView } from "@/board/proposal-view";
 import { requireRole } from "@/lib/auth/guard";
 import { BOARD_ROLES } from "@/lib/auth/navigation";
 import { AppError, fieldErrorsOf } from "@/lib/errors";
+import { runEngine } from "@/lib/engine-pool/engine";
 import { handleRoute, parseIdParam } from "@/lib/http";
 import type { ParsedReferenceBands } from "@/lib/reference-bands";
-import { buildMetrics } from "@/lib/review/metrics";
 import { metricsQuerySchema } from "@/lib/review/metrics-query";
 
 export const dynamic = "force-dynamic";
@@ -19,5 +19,5 @@ export const GET = handleRoute(async (request: Request, { params }: { params: Pr
   if (!view || !view.latestDocument) throw new AppError("not-found:proposal", "That proposal does not exist or has no valid revision.");
   const first = view.references[0];
   const reference = first ? { id: first.id, name: first.name, parsed: first.parsed as ParsedReferenceBands & { pointsTotal?: number } } : null;
-  return Response.json({ rows: buildMetrics(view.latestDocument, view.baseDocument, reference, query.data) });
+  return Response.json({ rows: await runEngine("metrics", view.latestDocument, view.baseDocument, reference, query.data) });
 });

@@ -8,8 +8,8 @@ import { db } from "@/db/client";
 import { requirePageUser } from "@/lib/auth/guard";
 import { BOARD_ROLES } from "@/lib/auth/navigation";
 import { validityText } from "@/lib/families/view";
+import { runEngine } from "@/lib/engine-pool/engine";
 import { loadFitContext } from "@/lib/fits/context";
-import { buildFitQuality } from "@/lib/fits/quality";
 import { getFitRun, listReruns } from "@/lib/fits/queries";
 import { compareReproduction } from "@/lib/fits/reproduce";
 import { describeFitWeights } from "@/lib/fits/result-document";
@@ -40,7 +40,7 @@ export default async function FitRecordPage({ params }: { params: Promise<{ id: 
   const outcome = run.outcome;
   // The plots need only the fitted values (the provenance the revision carries does not change a band).
   const fitted = outcome ? setParameters(ctx.document, Object.fromEntries(outcome.names.map((k, i) => [k, outcome.values[i]]))) : null;
-  const quality = outcome && fitted ? buildFitQuality(ctx.document, fitted, ctx.parsedReference, run.spec, outcome) : null;
+  const quality = outcome && fitted ? await runEngine("fitQuality", ctx.document, fitted, ctx.parsedReference, run.spec, outcome) : null;
   const original = run.rerunOf ? await getFitRun(db, run.rerunOf) : null;
   const reruns = await listReruns(db, run.id);
   const comparisons = [

@@ -3,7 +3,8 @@ import { AppError } from "@/lib/errors";
 import { authenticateApiRequest } from "@/lib/registry/api-auth";
 import { apiHeaders, loadDocument, loadRelease, parseReleaseParams } from "@/lib/registry/api-load";
 import { apiRoute } from "@/lib/registry/api-route";
-import { bandsAtPoints, bandsCsv, bandsOnDefaultPath, parseKPointList } from "@/lib/registry/downloads";
+import { runEngine } from "@/lib/engine-pool/engine";
+import { bandsCsv, parseKPointList } from "@/lib/registry/downloads";
 
 export const dynamic = "force-dynamic";
 
@@ -25,9 +26,9 @@ export const GET = apiRoute(async (request: Request, ctx: { params: Promise<{ sl
   if (q.data.k !== undefined) {
     const k = parseKPointList(q.data.k, doc.lattice.dimension);
     if (typeof k === "string") throw new AppError("invalid:kpoints", k);
-    bands = bandsAtPoints(doc, k);
+    bands = await runEngine("bandsAtPoints", doc, k);
   } else {
-    bands = bandsOnDefaultPath(doc, q.data.points);
+    bands = await runEngine("bandsOnPath", doc, q.data.points);
   }
   const headers = apiHeaders(caller.rate, { "Bandgate-Release-Version": release.version, "Bandgate-Release-Sha256": release.sha256 });
   if (q.data.format === "csv") {

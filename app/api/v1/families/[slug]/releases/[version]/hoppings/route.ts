@@ -3,7 +3,8 @@ import { AppError } from "@/lib/errors";
 import { authenticateApiRequest } from "@/lib/registry/api-auth";
 import { apiHeaders, loadDocument, loadRelease, parseReleaseParams } from "@/lib/registry/api-load";
 import { apiRoute } from "@/lib/registry/api-route";
-import { hoppingsCsv, releaseHoppings } from "@/lib/registry/downloads";
+import { runEngine } from "@/lib/engine-pool/engine";
+import { hoppingsCsv } from "@/lib/registry/downloads";
 
 export const dynamic = "force-dynamic";
 
@@ -16,7 +17,7 @@ export const GET = apiRoute(async (request: Request, ctx: { params: Promise<{ sl
   if (!q.success) throw new AppError("invalid:format", "format must be json or csv.");
   const caller = await authenticateApiRequest(request);
   const { release } = await loadRelease(slug, version);
-  const hoppings = releaseHoppings(await loadDocument(release.id));
+  const hoppings = await runEngine("hoppings", await loadDocument(release.id));
   const headers = apiHeaders(caller.rate, { "Bandgate-Release-Version": release.version, "Bandgate-Release-Sha256": release.sha256 });
   if (q.data.format === "csv") {
     headers.set("Content-Type", "text/csv; charset=utf-8");
