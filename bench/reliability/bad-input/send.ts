@@ -74,6 +74,8 @@ export async function sendCase(c: BadCase, ctx: CaseContext, creds: Credentials)
   const headers = new Headers(spec.headers);
   if (c.auth === "author") headers.set("cookie", creds.cookie);
   if (c.auth === "token" && !headers.has("authorization")) headers.set("authorization", `Bearer ${creds.token}`);
+  // As a browser sends it on every POST: the inputs must reach the route's own checks, not stop at a cross-site guard.
+  if (spec.method === "POST" && !headers.has("origin")) headers.set("origin", creds.base);
   const before = await snapshot();
   const mark = creds.server.mark();
   const t0 = performance.now();
