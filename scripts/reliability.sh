@@ -40,13 +40,13 @@ ensure_postgres_binaries
 export PGBIN
 pg_up "$RELIABILITY_PG_DATA" "$RELIABILITY_PG_PORT"
 recreate_database "$RELIABILITY_PG_PORT" bandgate_reliability
-export DATABASE_URL="postgres://postgres@127.0.0.1:$RELIABILITY_PG_PORT/bandgate_reliability"
+ensure_roles "$RELIABILITY_PG_PORT" bandgate_reliability   # the app and the worker connect as the app role
 export NEXTAUTH_SECRET="reliability-secret-not-for-production-0123456789"
 export NEXTAUTH_URL="http://127.0.0.1:$RELIABILITY_WEB_PORT" APP_URL="http://127.0.0.1:$RELIABILITY_WEB_PORT"
 export SMTP_HOST=127.0.0.1 SMTP_PORT="$RELIABILITY_SMTP_PORT" MAIL_FROM="Bandgate reliability <bandgate@reliability.invalid>"
 export BANDGATE_ENV=test
 # The worker as npm test runs it: quick webhook retries, receivers on 127.0.0.1, one refit at a time (2-core machines).
-export WEBHOOK_RETRY_DELAY_SECONDS=1 WEBHOOK_ALLOW_PRIVATE=true FIT_CONCURRENCY=1
+export WEBHOOK_RETRY_DELAY_SECONDS=1 WEBHOOK_ALLOW_NETWORKS=127.0.0.0/8 FIT_CONCURRENCY=1
 
 node_modules/.bin/tsx db/migrate.ts >/dev/null
 start_child node_modules/.bin/tsx mail/fake-smtp-main.ts >"$RELIABILITY_RUN_DIR/mail.log" 2>&1
