@@ -6,7 +6,7 @@ import { API_TOKEN_LIMIT } from "@/lib/registry/tokens";
 import { createBoardWorld, draftProposal } from "../support/board-fixtures";
 import { appUrl, HttpSession } from "../support/http-session";
 import { createPerson } from "../support/people";
-import { actionResult, callServerAction, serverActionId, type UploadedFile } from "../support/server-action";
+import { actionResult, callServerAction, serverActionId } from "../support/server-action";
 
 afterAll(closeDb);
 
@@ -72,30 +72,26 @@ describe("NUL in text that would reach PostgreSQL", () => {
     expect(await db.select().from(remarks).where(eq(remarks.proposalId, id))).toHaveLength(0);
   });
 
-  it("an upload with a NUL in a comment line or in its file name is refused with a message, and nothing is stored", async () => {
+  it("an upload with a NUL in a comment line, its file name or its name is refused with a message, and nothing is stored", async () => {
     const world = await createBoardWorld();
     const id = await draftProposal(world);
     const author = await sessionFor(world.author);
-    const upload = serverActionId("app/(workspace)/proposals/actions.ts", "uploadReferenceAction");
-    const send = (file: UploadedFile) =>
-      callServerAction(author, `/proposals/${id}`, upload, { proposalId: id, name: "nul probe", method: "DFT-PBE", code: "fixture 1.0", structureSource: "fixture chain", file });
     const good = "k_index,E1 (eV)\n0,-7.8\n1,-7.79\n";
+    const provenance = { method: "DFT-PBE", code: "fixture 1.0", structureSource: "fixture chain" };
+    const send = (fields: { name?: string; fileName?: string; content?: string }) =>
+      author.json(`/api/proposals/${id}/reference-bands`, "POST", { name: "nul probe", fileName: "ref.csv", content: good, provenance, ...fields });
 
-    const comment = actionResult((await send({ name: "ref.csv", type: "text/csv", content: `# made by hand \u0000\n${good}` })).text);
-    expect(comment).toMatchObject({ ok: false, code: "invalid:reference" });
-    expect(comment?.error).toMatch(/line 1, column 16.*NUL/);
-
-    const name = actionResult((await send({ name: "ref\u0000.csv", type: "text/csv", content: good })).text);
-    expect(name).toMatchObject({ ok: false });
-    expect(name?.code).toMatch(/^invalid:/);
-    expect(name?.fieldErrors?.file?.join(" ")).toMatch(/NUL/);
-
-    const field = actionResult((await callServerAction(author, `/proposals/${id}`, upload, { proposalId: id, name: "nul\u0000name", method: "DFT-PBE", code: "fixture 1.0", structureSource: "fixture chain", file: { name: "ref.csv", type: "text/csv", content: good } })).text);
-    expect(field).toMatchObject({ ok: false, code: "invalid:input" });
-    expect(field?.fieldErrors?.name?.join(" ")).toMatch(/NUL/);
+    for (const [field, fields] of [
+      ["content", { content: `# made by hand \u0000\n${good}` }],
+      ["fileName", { fileName: "ref\u0000.csv" }],
+      ["name", { name: "nul\u0000name" }],
+    ] as const) {
+      const body = await expectInvalid(await send(fields));
+      expect(body.error.message, field).toMatch(/NUL/);
+      expect(body.error.fieldErrors?.[field]?.join(" "), field).toMatch(/NUL/);
+    }
     expect(await db.select().from(referenceBandSets).where(eq(referenceBandSets.proposalId, id))).toHaveLength(0);
-
-    expect(actionResult((await send({ name: "ref.csv", type: "text/csv", content: good })).text)).toMatchObject({ ok: true });
+    expect((await send({})).status).toBe(201);
   });
 });
 

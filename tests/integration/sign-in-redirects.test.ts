@@ -32,7 +32,9 @@ describe("the place to return to after signing in", () => {
     for (const raw of malformed) {
       const res = await session.fetch(`/login?callbackUrl=${raw}`);
       expect(res.status, raw).toBeLessThan(500);
-      expect(landing(res)?.href, raw).toBe(`${origin()}/`);
+      // An address holding %00 is refused (400) before any page runs; the others send the signed-in person home.
+      if (raw.includes("%00")) expect(res.status, raw).toBe(400);
+      else expect(landing(res)?.href, raw).toBe(`${origin()}/`);
     }
     const repeated = await session.fetch("/login?callbackUrl=/a&callbackUrl=/b");
     expect(repeated.status).toBeLessThan(500);
@@ -44,7 +46,8 @@ describe("the place to return to after signing in", () => {
     for (const raw of [...malformed, "https://evil.example/", "/%09/evil.example/phish", "//evil.example"]) {
       const res = await new HttpSession(appUrl()).fetch(`/api/auth/signin?callbackUrl=${raw}`);
       expect(res.status, raw).toBeLessThan(500);
-      expect(landing(res)?.origin, raw).toBe(origin());
+      if (raw.includes("%00")) expect(res.status, raw).toBe(400);
+      else expect(landing(res)?.origin, raw).toBe(origin());
 
       const { csrfToken } = (await (await session.fetch("/api/auth/csrf")).json()) as { csrfToken: string };
       const post = await session.fetch("/api/auth/callback/credentials", {
