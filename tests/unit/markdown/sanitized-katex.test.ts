@@ -2,7 +2,7 @@ import { fromHtmlIsomorphic } from "hast-util-from-html-isomorphic";
 import { toHtml } from "hast-util-to-html";
 import katex from "katex";
 import { describe, expect, it } from "vitest";
-import { katexOptions } from "@/lib/markdown/formula";
+import { KATEX_OPTIONS } from "@/lib/markdown/formula";
 import { renderUserMarkdown } from "@/lib/markdown/render";
 
 /** Formulas covering KaTeX's output: fractions, roots, stretchy SVGs, arrays, colours, MathML attributes, spacing. */
@@ -12,7 +12,7 @@ const stringify = (html: string) => toHtml(fromHtmlIsomorphic(html, { fragment: 
 
 describe("the sanitizer keeps KaTeX's output whole", () => {
   it.each(CORPUS)("%s", (tex) => {
-    const expected = stringify(katex.renderToString(tex, katexOptions(true)));
+    const expected = stringify(katex.renderToString(tex, { ...KATEX_OPTIONS, displayMode: true }));
     expect(renderUserMarkdown(`$$\n${tex}\n$$`).html).toBe(expected);
   });
 });

@@ -1,11 +1,10 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { useState } from "react";
 import { ActionForm } from "@/app/_components/action-form";
 import { inputClass, primaryButtonClass } from "@/app/_components/form-parts";
-import { Markdown } from "@/app/_components/markdown";
+import { MarkdownPreview } from "@/app/_components/markdown-preview";
 import { describeAnchor, REMARK_MAX, type RemarkAnchor } from "@/board/remark-rules";
-import { renderUserMarkdown } from "@/lib/markdown/render";
 import { createRemarkAction } from "./actions";
 
 /** A new remark (or a reply): markdown with $inline$ and $$display$$ math, @mentions by e-mail name, optional blocking flag. */
@@ -13,8 +12,6 @@ export function RemarkForm({ proposalId, anchor, parentId, mayBlock, clearAnchor
   const [text, setText] = useState("");
   const [preview, setPreview] = useState(false);
   const reply = Boolean(parentId);
-  // The same bounded renderer the server stores remarks with, run here only while the preview is open.
-  const previewHtml = useMemo(() => (preview ? renderUserMarkdown(text || "_nothing yet_").html : null), [preview, text]);
   return (
     <ActionForm action={createRemarkAction} label={reply ? "Reply" : "Write a remark"} className={reply ? "mt-2" : "rounded-lg border border-rule bg-card p-4"}>
       {({ pending, fieldErrors }) => (
@@ -34,9 +31,9 @@ export function RemarkForm({ proposalId, anchor, parentId, mayBlock, clearAnchor
           ) : null}
           <label className="block text-sm">
             <span className={reply ? "sr-only" : "mb-1 block font-semibold"}>{reply ? "Reply" : "Remark"}</span>
-            {previewHtml !== null ? (
+            {preview ? (
               <div className="min-h-20 rounded-md border border-rule bg-white p-2" data-testid="remark-preview">
-                <Markdown html={previewHtml} />
+                <MarkdownPreview text={text || "_nothing yet_"} />
               </div>
             ) : (
               <textarea
