@@ -19,8 +19,15 @@ export const DOCUMENT_BODY_LIMIT: BodyLimit = { maxBytes: DOCUMENT_MAX_BYTES + E
 export const REFERENCE_BODY_LIMIT: BodyLimit = { maxBytes: Math.ceil(REFERENCE_MAX_BYTES * 1.25) + ENVELOPE_BYTES, code: "too-large:reference", message: REFERENCE_TOO_LARGE };
 
 /**
+ * A streamed body found too large is still read to its end, and dropped, up to this many times the limit: a sender
+ * that is still writing then gets the answer rather than a connection reset. Beyond that the connection is cut.
+ */
+const DRAIN_FACTOR = 4;
+
+/**
  * The body as text, refused as soon as it is known to be too large: by its Content-Length before anything is read,
- * and by counting while it streams in (a sender may leave the length out, or state it falsely).
+ * and by counting while it streams in (a sender may leave the length out, or state it falsely). Nothing beyond the
+ * limit is kept.
  */
 export async function readBodyText(request: Request, limit: BodyLimit): Promise<string> {
   const tooLarge = () => new AppError(limit.code, limit.message, undefined, { limitBytes: limit.maxBytes });
@@ -34,11 +41,12 @@ export async function readBodyText(request: Request, limit: BodyLimit): Promise<
     const { done, value } = await reader.read();
     if (done) break;
     size += value.byteLength;
-    if (size > limit.maxBytes) {
+    if (size > limit.maxBytes * DRAIN_FACTOR) {
       await reader.cancel().catch(() => undefined);
       throw tooLarge();
     }
-    chunks.push(value);
+    if (size <= limit.maxBytes) chunks.push(value);
   }
+  if (size > limit.maxBytes) throw tooLarge();
   return new TextDecoder().decode(Buffer.concat(chunks));
 }

@@ -31,23 +31,24 @@ describe("one document size limit and the basis limit, on every path that takes 
   it("JSON API, new proposal: refuses a basis over the limit (422) and a document over 2 MiB (413), storing nothing", async () => {
     const world = await createBoardWorld();
     const author = await signedIn(world);
+    const titles = ["too many states", "too many bytes", "five megabytes", "streamed"].map((t) => `${t} ${world.familySlug}`);
     const post = (title: string, document: unknown) => author.json("/api/proposals", "POST", { familySlug: world.familySlug, baseReleaseId: null, title, document });
 
-    const basis = await post("too many states", overBasis);
+    const basis = await post(titles[0], overBasis);
     expect(basis.status).toBe(422);
     expect((await basis.json()).error).toMatchObject({ code: "refused:basis-size", message: BASIS_MESSAGE, details: { basis: 80, limit: 64 } });
 
-    const bytes = await post("too many bytes", overBytes(world.base));
+    const bytes = await post(titles[1], overBytes(world.base));
     expect(bytes.status).toBe(413);
     expect((await bytes.json()).error).toMatchObject({ code: "too-large:document", message: DOCUMENT_TOO_LARGE });
 
     // A 5 MB description: refused by its Content-Length, before the body is read.
-    const huge = await post("five megabytes", { ...world.base, description: "x".repeat(5_000_000) });
+    const huge = await post(titles[2], { ...world.base, description: "x".repeat(5_000_000) });
     expect(huge.status).toBe(413);
     expect((await huge.json()).error.message).toBe(DOCUMENT_TOO_LARGE);
 
     // The same without a Content-Length (streamed): refused while it arrives.
-    const text = JSON.stringify({ familySlug: world.familySlug, baseReleaseId: null, title: "streamed", document: { ...world.base, description: "x".repeat(5_000_000) } });
+    const text = JSON.stringify({ familySlug: world.familySlug, baseReleaseId: null, title: titles[3], document: { ...world.base, description: "x".repeat(5_000_000) } });
     const bytesOut = new TextEncoder().encode(text);
     const stream = new ReadableStream<Uint8Array>({
       start(controller) {
@@ -59,7 +60,7 @@ describe("one document size limit and the basis limit, on every path that takes 
     expect(streamed.status).toBe(413);
     expect((await streamed.json()).error.message).toBe(DOCUMENT_TOO_LARGE);
 
-    for (const title of ["too many states", "too many bytes", "five megabytes", "streamed"]) expect(await proposalsTitled(title)).toBe(0);
+    for (const title of titles) expect(await proposalsTitled(title)).toBe(0);
   });
 
   it("JSON API, new revision: the same refusals, and no revision is added", async () => {

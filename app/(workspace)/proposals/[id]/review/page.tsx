@@ -16,6 +16,7 @@ import { runEngine } from "@/lib/engine-pool/engine";
 import type { BandViewData } from "@/lib/review/band-view";
 import { proposalSlug } from "@/lib/review/export-names";
 import type { MetricsRow } from "@/lib/review/metrics";
+import type { ParameterDiff } from "@/lib/review/param-diff";
 import { RecentResults } from "@/lib/review/recent-results";
 import { canonicalJson } from "@/lib/tb/canonical";
 import { ProposalHeading } from "../proposal-heading";
@@ -39,6 +40,7 @@ export const metadata: Metadata = { title: "Review workspace" };
  */
 const bandViews = new RecentResults<Promise<BandViewData>>(32);
 const metricsTables = new RecentResults<Promise<MetricsRow[]>>(64);
+const parameterDiffs = new RecentResults<Promise<ParameterDiff>>(64);
 export const dynamic = "force-dynamic";
 
 function remembered<T>(store: RecentResults<Promise<T>>, key: string, compute: () => Promise<T>): Promise<T> {
@@ -64,7 +66,10 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const references = view.references.map((r) => ({ id: r.id, name: r.name, parsed: r.parsed as ParsedReferenceBands & { pointsTotal?: number } }));
   // Keyed by immutable ids: the latest revision, the base release and the reference sets.
   const inputsKey = [latest.id, proposal.baseReleaseId ?? "none", ...references.map((r) => r.id)].join("|");
-  const diffResult = to.doc ? runEngine("parameterDiff", from.doc, to.doc, { window: window ?? undefined }) : Promise.resolve(null);
+  // Revisions of a proposal and its base release never change, so the pair of sides names the diff for ever.
+  const diffKey = [proposal.id, from.value, to.value, window ?? ""].join("|");
+  const toDoc = to.doc;
+  const diffResult = toDoc ? remembered(parameterDiffs, diffKey, () => runEngine("parameterDiff", from.doc, toDoc, { window: window ?? undefined })) : Promise.resolve(null);
   const bandViewResult = remembered(bandViews, inputsKey, () => runEngine("bandView", latestDocument, baseDocument, references));
   const [diff, bandView, remarkRows] = await Promise.all([diffResult, bandViewResult, listRemarks(id)]);
   const metricsSettings = { window, alignment: bandView.proposedVbm === null ? ("none" as const) : ("vbm" as const) };
