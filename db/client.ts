@@ -12,6 +12,9 @@ const cache = globalThis as unknown as { bandgatePool?: Pool; bandgateDb?: Datab
 
 function createDb(): Database {
   const pool = new Pool({ connectionString: serverEnv().DATABASE_URL, max: 10 });
+  // An idle connection dropped by the server (a restart, an administrator) is replaced on the next query; without a
+  // listener the pool's "error" event would end the process.
+  pool.on("error", (err) => console.error(`[bandgate] database connection lost: ${err.message}`));
   cache.bandgatePool = pool;
   return drizzle(pool, { schema });
 }

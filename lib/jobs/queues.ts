@@ -46,7 +46,7 @@ export interface RegistryMailJob {
 export async function ensureQueues(boss: PgBoss): Promise<void> {
   const s = jobSettings();
   await boss.createQueue(QUEUES.releaseEvent, { name: QUEUES.releaseEvent, retryLimit: 5, retryDelay: 5, retryBackoff: true });
-  await boss.createQueue(QUEUES.webhookDelivery, { name: QUEUES.webhookDelivery, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true });
+  await boss.createQueue(QUEUES.webhookDelivery, { name: QUEUES.webhookDelivery, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true, expireInSeconds: webhookJobExpiry() });
   await boss.createQueue(QUEUES.registryMail, { name: QUEUES.registryMail, retryLimit: 5, retryDelay: 30, retryBackoff: true });
   await boss.createQueue(QUEUES.passwordResetMail, { name: QUEUES.passwordResetMail, retryLimit: 3, retryDelay: 10, retryBackoff: true });
   await boss.createQueue(QUEUES.rateWindowCleanup, { name: QUEUES.rateWindowCleanup, policy: "singleton" });
@@ -57,7 +57,16 @@ export async function ensureQueues(boss: PgBoss): Promise<void> {
 /** Retry options sent with each webhook job, so a changed setting applies without recreating the queue. */
 export function webhookJobOptions(deliveryId: string): PgBoss.SendOptions {
   const s = jobSettings();
-  return { id: deliveryId, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true };
+  return { id: deliveryId, retryLimit: s.WEBHOOK_RETRY_LIMIT, retryDelay: s.WEBHOOK_RETRY_DELAY_SECONDS, retryBackoff: true, expireInSeconds: webhookJobExpiry() };
+}
+
+/**
+ * One delivery attempt lasts at most the call's timeout plus a few writes, so a job still active well after that
+ * belonged to a worker that died mid-delivery: it expires and is retried (at least once; the receiver sees the same
+ * Bandgate-Delivery id) instead of waiting pg-boss's default quarter of an hour.
+ */
+export function webhookJobExpiry(): number {
+  return Math.ceil(jobSettings().WEBHOOK_TIMEOUT_MS / 1000) + 30;
 }
 
 /**

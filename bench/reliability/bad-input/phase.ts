@@ -12,7 +12,7 @@ import type { BadCase, CaseContext } from "./case";
 import { documentCases, remarkCases } from "./json-body-cases";
 import { queryCases } from "./query-cases";
 import { sendCase, type Outcome } from "./send";
-import { uploadActionId, uploadCases } from "./upload-cases";
+import { uploadCases } from "./upload-cases";
 
 const SLOW_MS = 1000;
 const MIN_INPUTS = 1000;
@@ -36,9 +36,7 @@ function storedInputViews(world: World): BadCase[] {
 function allCases(world: World, seed: number): { cases: BadCase[]; notes: string[] } {
   const rng = seededUniform(seed);
   const notes: string[] = [];
-  const actionId = uploadActionId();
-  if (!actionId) notes.push("the build has no uploadReferenceAction: reference files were NOT sent (update bench/reliability/bad-input/upload-cases.ts to the new upload path)");
-  const cases = [...queryCases(world), ...remarkCases(world, rng), ...(actionId ? uploadCases(world, rng, actionId) : []), ...documentCases(world, rng), ...storedInputViews(world)];
+  const cases = [...queryCases(world), ...remarkCases(world, rng), ...uploadCases(world, rng), ...documentCases(world, rng), ...storedInputViews(world)];
   return { cases, notes };
 }
 

@@ -1,30 +1,17 @@
-import { readFileSync } from "node:fs";
-import { createRequire } from "node:module";
 import { syntheticReference } from "@/tests/integration/fit-world";
 import { reliabilitySettings } from "../settings";
 import type { World } from "../world";
-import type { BadCase } from "./case";
+import { JSON_TYPE, type BadCase } from "./case";
 import { damageText, mutate, pick, type Rng } from "./mutate";
 import { FIELD_VALUES, isRaw, NASTY_STRINGS, toJsonText, type Labelled } from "./values";
 
-// React's own encoder for server-function arguments, as the browser uses it (Next ships it compiled, for Node too).
-const require = createRequire(import.meta.url);
-const { encodeReply } = require("next/dist/compiled/react-server-dom-turbopack/client.node") as {
-  encodeReply(value: unknown): Promise<FormData | string>;
-};
-
-interface Manifest {
-  node: Record<string, { filename: string; exportedName: string }>;
+/** What the upload form sends: the file's name and text, the set's name and its provenance fields. */
+interface Fields {
+  name?: unknown;
+  fileName?: unknown;
+  content?: unknown;
+  provenance?: Record<string, unknown>;
 }
-
-/** The id under which the production build registered the reference-bands upload action, or null if it has none. */
-export function uploadActionId(): string | null {
-  const manifest = JSON.parse(readFileSync(".next/server/server-reference-manifest.json", "utf8")) as Manifest;
-  const hit = Object.entries(manifest.node).find(([, v]) => v.exportedName === "uploadReferenceAction");
-  return hit?.[0] ?? null;
-}
-
-type Fields = Record<string, string | File>;
 
 const CSV_CELLS: readonly string[] = ["NaN", "inf", "-Infinity", "1e308", "-1e308", "1e999", "", " ", "\u0000", "0x10", '"1,5"', '"unterminated', "\u0661\u0662", "\u22121", "1e-400", "9".repeat(400), "+-1", "1_000"];
 const CSV_HEADERS: readonly string[] = ["E1 (MeV)", "E1", "", "k_index", "E1 (eV)\u0000", "band_1 [eV", "k1", "k_path (1/parsec)", "E1 (eV) (eV)"];
@@ -68,30 +55,28 @@ function mutateCsv(rng: Rng, csv: string): { text: string | Buffer; summary: str
   }
 }
 
-/** Reference band files, their names and provenance through the upload action of the proposal page. */
-export function uploadCases(world: World, rng: Rng, actionId: string): BadCase[] {
+/** Reference band files, their names and provenance through the upload route the proposal page uses. */
+export function uploadCases(world: World, rng: Rng): BadCase[] {
   const proposalId = world.proposals.uploads;
   const json = syntheticReference(world.board.base, 0.002, 31);
   const energies = (JSON.parse(json) as { energies: number[][] }).energies;
   const csv = [`k_index,${energies[0].map((_, b) => `E${b + 1} (eV)`).join(",")}`, ...energies.map((row, i) => `${i},${row.map((e) => e.toFixed(6)).join(",")}`)].join("\n") + "\n";
-  const valid: Fields = { proposalId, name: "Probe reference", method: "synthetic", code: "probe 1.0", structureSource: "the model's lattice" };
-  const file = (content: string | Buffer, name = "reference.csv") => new File([Buffer.isBuffer(content) ? new Uint8Array(content) : content], name, { type: name.endsWith(".json") ? "application/json" : "text/csv" });
+  const provenance = { method: "synthetic", code: "probe 1.0", structureSource: "the model's lattice" };
+  const valid = { name: "Probe reference", provenance };
+  const text = (content: string | Buffer) => (Buffer.isBuffer(content) ? content.toString("utf8") : content);
+  const file = (content: string | Buffer, fileName = "reference.csv") => ({ fileName, content: text(content) });
 
-  const upload = (summary: string, fields: () => Fields, headers: Record<string, string> = {}): BadCase => ({
-    route: "POST /proposals/:id (upload reference bands action)",
+  const upload = (summary: string, fields: () => Fields, headers: Record<string, string> = {}, target = proposalId): BadCase => ({
+    route: "POST /api/proposals/:id/reference-bands",
     summary,
     auth: "author",
-    judge: "action",
-    build: async () => {
-      const form = new FormData();
-      for (const [k, v] of Object.entries(fields())) form.append(k, v);
-      return {
-        method: "POST",
-        path: `/proposals/${proposalId}`,
-        headers: { "next-action": actionId, accept: "text/x-component", origin: reliabilitySettings().baseUrl, ...headers },
-        body: (await encodeReply([null, form])) as FormData,
-      };
-    },
+    judge: "status",
+    build: () => ({
+      method: "POST",
+      path: `/api/proposals/${target}/reference-bands`,
+      headers: { "content-type": JSON_TYPE, origin: reliabilitySettings().baseUrl, ...headers },
+      body: JSON.stringify(fields()),
+    }),
   });
   const padded = (bytes: number) => `${"#".repeat(bytes - csv.length - 1)}\n${csv}`;
   const stringFields = FIELD_VALUES.filter(([, v]) => typeof v === "string" && !isRaw(v)) as Labelled<string>[];
@@ -99,30 +84,28 @@ export function uploadCases(world: World, rng: Rng, actionId: string): BadCase[]
   return [
     ...Array.from({ length: 60 }, () => {
       const m = mutateCsv(rng, csv);
-      return upload(`CSV: ${m.summary}`, () => ({ ...valid, file: file(m.text) }));
+      return upload(`CSV: ${m.summary}`, () => ({ ...valid, ...file(m.text) }));
     }),
     ...Array.from({ length: 40 }, () => {
       const m = mutate(rng, JSON.parse(json));
-      return upload(`JSON: ${m.summary}`, () => ({ ...valid, file: file(toJsonText(m.value), "reference.json") }));
+      return upload(`JSON: ${m.summary}`, () => ({ ...valid, ...file(toJsonText(m.value), "reference.json") }));
     }),
-    upload("CSV: 501 band columns", () => ({ ...valid, file: file(`k_index,${Array.from({ length: 501 }, (_, b) => `E${b + 1} (eV)`).join(",")}\n0,${"0,".repeat(500)}0\n`) })),
-    upload("CSV: 20,001 rows", () => ({ ...valid, file: file(`k_index,E1 (eV)\n${Array.from({ length: 20_001 }, (_, i) => `${i},0`).join("\n")}\n`) })),
-    ...NASTY_STRINGS.map(([l, v]) => upload(`file name = ${l}`, () => ({ ...valid, file: file(csv, v) }))),
-    ...stringFields.map(([l, v]) => upload(`name = ${l}`, () => ({ ...valid, name: v, file: file(csv) }))),
+    upload("CSV: 501 band columns", () => ({ ...valid, ...file(`k_index,${Array.from({ length: 501 }, (_, b) => `E${b + 1} (eV)`).join(",")}\n0,${"0,".repeat(500)}0\n`) })),
+    upload("CSV: 20,001 rows", () => ({ ...valid, ...file(`k_index,E1 (eV)\n${Array.from({ length: 20_001 }, (_, i) => `${i},0`).join("\n")}\n`) })),
+    ...NASTY_STRINGS.map(([l, v]) => upload(`file name = ${l}`, () => ({ ...valid, ...file(csv, v) }))),
+    ...stringFields.map(([l, v]) => upload(`name = ${l}`, () => ({ ...valid, name: v, ...file(csv) }))),
     ...["method", "code", "structureSource", "alignmentNote"].flatMap((field) =>
-      stringFields.filter(([l]) => ["NUL inside", "CR/LF header injection", "100,001 chars", "empty string"].includes(l)).map(([l, v]) => upload(`${field} = ${l}`, () => ({ ...valid, [field]: v, file: file(csv) }))),
+      stringFields.filter(([l]) => ["NUL inside", "CR/LF header injection", "100,001 chars", "empty string"].includes(l)).map(([l, v]) => upload(`${field} = ${l}`, () => ({ ...valid, provenance: { ...provenance, [field]: v }, ...file(csv) }))),
     ),
-    upload("empty file", () => ({ ...valid, file: file("") })),
-    upload("0.9 MB file (valid, padded with comments)", () => ({ ...valid, file: file(padded(900_000)) })),
-    upload("1.5 MB file (valid, padded with comments)", () => ({ ...valid, file: file(padded(1_500_000)) })),
-    upload("6 MB file (over the 5 MiB limit)", () => ({ ...valid, file: file(padded(6_000_000)) })),
-    upload("no file field", () => ({ ...valid })),
-    upload("file sent as a text field", () => ({ ...valid, file: csv })),
-    upload("proposalId = NUL", () => ({ ...valid, proposalId: "\u0000", file: file(csv) })),
-    upload("proposalId = not a uuid", () => ({ ...valid, proposalId: "not-a-uuid", file: file(csv) })),
-    upload("proposalId = nil uuid", () => ({ ...valid, proposalId: "00000000-0000-0000-0000-000000000000", file: file(csv) })),
-    upload("no proposalId", () => ({ name: valid.name, file: file(csv) })),
-    upload("unknown action id", () => ({ ...valid, file: file(csv) }), { "next-action": "7f".padEnd(42, "0") }),
-    upload("action id of 1,000 chars", () => ({ ...valid, file: file(csv) }), { "next-action": "a".repeat(1000) }),
+    upload("empty file", () => ({ ...valid, ...file("") })),
+    upload("0.9 MB file (valid, padded with comments)", () => ({ ...valid, ...file(padded(900_000)) })),
+    upload("1.5 MB file (valid, padded with comments)", () => ({ ...valid, ...file(padded(1_500_000)) })),
+    upload("6 MB file (over the 5 MiB limit)", () => ({ ...valid, ...file(padded(6_000_000)) })),
+    upload("no file", () => ({ ...valid })),
+    upload("file content as a number", () => ({ ...valid, fileName: "reference.csv", content: 42 })),
+    upload("provenance as a string", () => ({ ...valid, provenance: "dft" as unknown as Record<string, unknown>, ...file(csv) })),
+    upload("proposal id = not a uuid", () => ({ ...valid, ...file(csv) }), {}, "not-a-uuid"),
+    upload("proposal id = nil uuid", () => ({ ...valid, ...file(csv) }), {}, "00000000-0000-0000-0000-000000000000"),
+    upload("sent as text/plain", () => ({ ...valid, ...file(csv) }), { "content-type": "text/plain" }),
   ];
 }
